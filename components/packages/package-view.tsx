@@ -1,0 +1,74 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { toast } from "sonner";
+import { SafetyNotice } from "@/components/shell/safety-notice";
+import { fetchJson } from "@/lib/client/fetch-json";
+import { StatusTag } from "./status-tag";
+
+export type PackageViewProps = {
+  projectId: string;
+  pkg: { id: string; title: string; status: string; version: number; updatedAt: string };
+  canEdit: boolean;
+  canDelete: boolean;
+};
+
+export function PackageView({ projectId, pkg, canEdit, canDelete }: PackageViewProps) {
+  const router = useRouter();
+  const [title, setTitle] = useState(pkg.title);
+  const [renaming, setRenaming] = useState(false);
+
+  async function rename() {
+    try {
+      await fetchJson(`/api/v1/packages/${pkg.id}`, { method: "PATCH", body: { title } });
+      toast.success("Package renamed.");
+      setRenaming(false);
+      router.refresh();
+    } catch (e) {
+      toast.error(e instanceof Error ? e.message : "Could not rename.");
+    }
+  }
+
+  async function remove() {
+    if (!window.confirm(`Delete the draft package “${pkg.title}”? This cannot be undone.`)) return;
+    try {
+      await fetchJson(`/api/v1/packages/${pkg.id}`, { method: "DELETE" });
+      toast.success("Package deleted.");
+      router.push(`/projects/${projectId}`);
+    } catch (e) {
+      toast.error(e instanceof Error ? e.message : "Could not delete.");
+    }
+  }
+
+  return (
+    <article className="space-y-4" aria-label="Package">
+      <header className="flex flex-wrap items-center gap-3">
+        {renaming ? (
+          <>
+            <input className="pp-input max-w-md" value={title} onChange={(e) => setTitle(e.target.value)} aria-label="Package title" />
+            <button type="button" className="pp-btn" onClick={rename}>Save title</button>
+            <button type="button" className="pp-btn-quiet" onClick={() => setRenaming(false)}>Cancel</button>
+          </>
+        ) : (
+          <h2 className="font-serif text-2xl font-semibold">{pkg.title}</h2>
+        )}
+        <StatusTag status={pkg.status} />
+        <span className="pp-num text-xs text-ink-faint">version {pkg.version}</span>
+        <div className="ml-auto flex gap-2">
+          {canEdit && !renaming && pkg.status !== "issued" && (
+            <button type="button" className="pp-btn-quiet" onClick={() => setRenaming(true)}>Rename</button>
+          )}
+          {canDelete && pkg.status === "draft" && (
+            <button type="button" className="pp-btn-danger" onClick={remove}>Delete draft</button>
+          )}
+        </div>
+      </header>
+      <SafetyNotice className="border-l-2 border-caution bg-caution-light px-3 py-2 text-caution" />
+      <div className="pp-panel min-h-64 p-8 font-serif text-ink-soft" data-testid="editor-placeholder">
+        The package editor (narrative with live calcs) arrives here.
+        {canEdit ? " You will be able to edit this package." : " Your role reads this package."}
+      </div>
+    </article>
+  );
+}

@@ -1,0 +1,24 @@
+import type { TrussModel } from "../types";
+
+/** Joint lookup for a model whose references are already known to be sound. */
+export type TrussIndex = {
+  /** Joint id → position in `model.joints`. */
+  jointIndex: Map<string, number>;
+  /** Member i runs from joint `start[i]` to joint `end[i]` (positions in `model.joints`). */
+  start: Int32Array;
+  end: Int32Array;
+};
+
+/** Positions of every joint and member end, so that the solver never looks ids up in its loops. */
+export function indexTruss(model: TrussModel): TrussIndex {
+  const jointIndex = new Map<string, number>();
+  model.joints.forEach((j, i) => jointIndex.set(j.id, i));
+  const m = model.members.length;
+  const start = new Int32Array(m);
+  const end = new Int32Array(m);
+  model.members.forEach((member, i) => {
+    start[i] = jointIndex.get(member.start) ?? -1;
+    end[i] = jointIndex.get(member.end) ?? -1;
+  });
+  return { jointIndex, start, end };
+}
