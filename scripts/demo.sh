@@ -18,6 +18,8 @@ export PP_DB_RESET=0
 export APP_ENV=development
 pp_export_app_env
 
+pp_lock demo
+
 cleanup() {
   local status=$?
   # A second Ctrl-C must not cut the clean-up short and leave processes behind.
@@ -32,7 +34,7 @@ trap cleanup EXIT
 trap 'exit 130' INT
 trap 'exit 143' TERM
 
-pp_lock demo
+pp_stop_leftovers demo
 pp_npm_ci_if_needed
 pp_run bash scripts/ensure-system.sh postgresql chromium poppler-utils
 pp_start_pg demo

@@ -133,11 +133,12 @@ PP_SPAWNED=()
 pp_spawn() {
   local log="$1"
   shift
+  # 9>&-: the run's lock (pp_lock) must not live on in a server that outlives the run.
   if [[ "$log" == - ]]; then
-    setsid "$@" </dev/null &
+    setsid "$@" </dev/null 9>&- &
   else
     mkdir -p "$(dirname "$log")"
-    setsid "$@" </dev/null >>"$log" 2>&1 &
+    setsid "$@" </dev/null >>"$log" 2>&1 9>&- &
   fi
   PP_LAST_PID=$!
   PP_SPAWNED+=("$PP_LAST_PID")
@@ -196,7 +197,8 @@ pp_require_free_port() {
   if pp_port_open "$1"; then pp_die "port $1 on 127.0.0.1 is already in use ($2)"; fi
 }
 
-# One run at a time per kind (demo, test): they share folders and ports.
+# One run at a time per kind (demo, test): they share folders and ports. Take it before setting
+# the clean-up trap: a run turned away must not stop what the running one started.
 pp_lock() {
   mkdir -p "$PP_ROOT/.run"
   exec 9>"$PP_ROOT/.run/$1.lock"

@@ -12,6 +12,15 @@ pp_npm_ci_if_needed() {
   fi
 }
 
+# Leftovers of a run killed with -9, all at once before anything starts: an old worker must not
+# run beside the new services.
+pp_stop_leftovers() {
+  local pidfile
+  for pidfile in "$PP_ROOT/.run/$1"-*.pid; do
+    if [[ -f "$pidfile" ]]; then pp_stop_stale "$pidfile"; fi
+  done
+}
+
 # The app, the worker, migrations and tests read these through lib/env.ts: derived from the ports
 # so every child talks to the services this run started, whatever the caller's shell exports.
 pp_export_app_env() {
@@ -25,6 +34,9 @@ pp_export_app_env() {
   # next-auth 4 builds its callback URLs from NEXTAUTH_URL, not from APP_URL.
   export NEXTAUTH_URL="$APP_URL"
   export NEXT_TELEMETRY_DISABLED=1
+  # The SDK warns on every process start that its 2027 releases need Node 22; the lockfile pins a
+  # release that supports Node 20, so the warning only buries the useful output.
+  export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
 }
 
 # pp_start_fakes <kind>: fake SMTP + mail API + fake S3, ready when all three ports answer.

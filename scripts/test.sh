@@ -72,6 +72,8 @@ run_suite() {
 
 has_tests() { [[ -n "$(find "tests/$1" -name '*.test.ts' -print -quit 2>/dev/null)" ]]; }
 
+pp_lock test
+
 cleanup() {
   local status=$?
   trap '' INT TERM
@@ -91,7 +93,7 @@ trap cleanup EXIT
 trap 'exit 130' INT
 trap 'exit 143' TERM
 
-pp_lock test
+pp_stop_leftovers test
 pp_npm_ci_if_needed
 pp_run bash scripts/ensure-system.sh postgresql chromium poppler-utils
 # Mail and objects from an earlier run would leak into this one's assertions.

@@ -45,26 +45,27 @@ describe("moment points of a section", () => {
     expect(r.pivotKind.U0L1).toEqual({ kind: "off-truss point" });
     // closed form: R = (12 + 6)/2 = 9 kN; arm of U0L1 about (−4, 0) is 8/√5 m; F = 9·4/(8/√5) = 4.5√5 = 10.06 kN (tension)
     expect(r.forces.U0L1).toBeCloseTo(4.5 * Math.sqrt(5), 9);
+    // common practice: a moment point off the truss is defined by its coordinates before it is used
     expect(r.steps.some((s) => s.latex.startsWith("P_{1} = "))).toBe(true);
     expect(r.steps.some((s) => s.latex.startsWith("\\sum M_{P_{1}} = 0"))).toBe(true);
   });
 
   it("uses joint U0 on the free body for the bottom chord of the end panel", () => {
     const r = cutSection(trapezoid, { loadCase: "D", members: ["U0U1", "U0L1", "L0L1"], keep: "L0" });
-    expect(r.pivotKind.L0L1).toEqual({ kind: "joint", joint: "U0" });
+    expect(r.pivotKind.L0L1).toEqual({ kind: "joint", joint: "U0" }); // closed form: U0U1 and U0L1 meet at U0
     // closed form: the only other force on the free body, the reaction at L0, passes through U0, so L0L1 = 0
     expect(r.forces.L0L1).toBe(0);
-    expect(r.pivotKind.U0U1).toEqual({ kind: "joint", joint: "L1" });
+    expect(r.pivotKind.U0U1).toEqual({ kind: "joint", joint: "L1" }); // closed form: U0L1 and L0L1 meet at L1
     // closed form: ΣM about L1 (4, 0): −9 kN·4 m − F·(8/√5 m) = 0 → U0U1 = −4.5√5 = −10.06 kN (compression)
     expect(r.forces.U0U1).toBeCloseTo(-4.5 * Math.sqrt(5), 9);
   });
 
   it("names the support where the top chord line passes through the heel", () => {
     const r = cutSection(pitchedHowe, { loadCase: "D", members: ["U1U2", "L1U2", "L1L2"], keep: "L0" });
-    expect(r.pivotKind.L1U2).toEqual({ kind: "support", joint: "L0" });
+    expect(r.pivotKind.L1U2).toEqual({ kind: "support", joint: "L0" }); // closed form: y = x/2 and y = 0 meet at the heel (0, 0)
     // closed form: ΣM about L0: −P·3 + F·(3 sin 45°) = 0 → F = P/sin 45° = 10√2 kN (tension)
     expect(r.forces.L1U2).toBeCloseTo(10 * Math.SQRT2, 9);
-    expect(r.agrees).toBe(true);
+    expect(r.agrees).toBe(true); // closed form: determinate, so the stiffness solution matches
   });
 
   it("takes a force sum (null pivot) when the other two cut members are parallel chords", () => {
@@ -77,10 +78,10 @@ describe("moment points of a section", () => {
       loadCases: [{ id: "D", loads: [{ joint: "L1", fy: -8 }] }],
     };
     const r = cutSection(square, { loadCase: "D", members: ["U0U1", "L0U1", "L0L1"], keep: "L1" });
-    expect(r.pivots.L0U1).toBeNull();
+    expect(r.pivots.L0U1).toBeNull(); // closed form: U0U1 and L0L1 are both horizontal
     expect(r.pivotKind.L0U1).toBeNull();
     // closed form: ΣFy on the tip (L1, U1): −8 kN + F·(−3/5) = 0, the diagonal pulling U1 towards L0 → F = −40/3 kN (compression)
     expect(r.forces.L0U1).toBeCloseTo(-40 / 3, 9);
-    expect(r.steps.some((s) => s.latex.startsWith("\\sum F_{y} = 0"))).toBe(true);
+    expect(r.steps.some((s) => s.latex.startsWith("\\sum F_{y} = 0"))).toBe(true); // common practice: shear across parallel chords by ΣFy
   });
 });

@@ -22,7 +22,7 @@ export class ApiClient {
     const form = new URLSearchParams({ csrfToken: csrf.csrfToken, email, password, json: "true", callbackUrl: `${BASE_URL}/projects` });
     const res = await this.raw("POST", "/api/auth/callback/credentials", form.toString(), "application/x-www-form-urlencoded");
     const location = res.headers.get("location") ?? "";
-    const body = res.status === 200 ? ((await res.json().catch(() => ({}))) as { url?: string }) : {};
+    const body = (await res.json().catch(() => ({}))) as { url?: string };
     const url = new URL(body.url ?? location ?? "", BASE_URL);
     const err = url.searchParams.get("error");
     if (err) return decodeURIComponent(err);

@@ -115,3 +115,40 @@ export function prattWithCounter(): TrussModel {
   const model = pratt4();
   return { ...model, members: [...model.members, bar("U2", "L1", 0.002, 2e8)] };
 }
+
+/** Pitched Howe over 12 m with a 3 m rise (top chord through the heels), 10 kN at L1, L2, L3. */
+export function pitchedHowe(): TrussModel {
+  const A = 0.002;
+  const E = 2e8;
+  return {
+    joints: [
+      ...[0, 1, 2, 3, 4].map((i) => ({ id: `L${i}`, x: 3 * i, y: 0 })),
+      { id: "U1", x: 3, y: 1.5 }, { id: "U2", x: 6, y: 3 }, { id: "U3", x: 9, y: 1.5 },
+    ],
+    members: [
+      bar("L0", "L1", A, E), bar("L1", "L2", A, E), bar("L2", "L3", A, E), bar("L3", "L4", A, E),
+      bar("L0", "U1", A, E), bar("U1", "U2", A, E), bar("U2", "U3", A, E), bar("U3", "L4", A, E),
+      bar("U1", "L1", A, E), bar("U2", "L2", A, E), bar("U3", "L3", A, E), bar("L1", "U2", A, E), bar("L3", "U2", A, E),
+    ],
+    supports: [{ joint: "L0", type: "pin" }, { joint: "L4", type: "roller" }],
+    loadCases: [{ id: "D", loads: [1, 2, 3].map((i) => ({ joint: `L${i}`, fy: -10 })) }],
+  };
+}
+
+/** Two triangles joined by three links (AD, BE, CF): every joint has three members, so the method of joints cannot start. */
+export function prism(): TrussModel {
+  const A = 0.001;
+  const E = 2e8;
+  return {
+    joints: [
+      { id: "A", x: 0, y: 0 }, { id: "B", x: 6, y: 0 }, { id: "C", x: 3, y: 5 },
+      { id: "D", x: 1.5, y: 1 }, { id: "E", x: 4, y: 0.8 }, { id: "F", x: 3.2, y: 3 },
+    ],
+    members: [
+      bar("A", "B", A, E), bar("B", "C", A, E), bar("C", "A", A, E), bar("D", "E", A, E), bar("E", "F", A, E),
+      bar("F", "D", A, E), bar("A", "D", A, E), bar("B", "E", A, E), bar("C", "F", A, E),
+    ],
+    supports: [{ joint: "A", type: "pin" }, { joint: "B", type: "roller" }],
+    loadCases: [{ id: "D", loads: [{ joint: "F", fy: -10 }] }],
+  };
+}

@@ -57,6 +57,7 @@ export function deflection(model: TrussModel, options: DeflectionOptions): Defle
   const members = requireSections(model);
   const { loadCase, result } = solveCase(model, options.loadCase);
   const virtual = solveTruss(unitLoadModel(model, options.joint, options.direction)).cases[UNIT_LOAD_CASE];
+  if (!virtual) throw new SolveError("INVALID", "The unit-load case could not be solved.", { path: "joint" });
   const joints = indexJoints(model);
   const units = modelUnits(model);
   const terms: VirtualWorkTerm[] = members.map((m) => {
@@ -64,7 +65,7 @@ export function deflection(model: TrussModel, options: DeflectionOptions): Defle
     const b = joints.get(m.end);
     const L = a && b ? Math.hypot(b.x - a.x, b.y - a.y) : 0;
     const N = result.forces[m.id] ?? 0;
-    const n = virtual?.forces[m.id] ?? 0;
+    const n = virtual.forces[m.id] ?? 0;
     return { member: m.id, N, n, L, A: m.A, E: m.E, contribution: (N * n * L) / (m.A * m.E) };
   });
   const value = terms.reduce((s, t) => s + t.contribution, 0) + 0;

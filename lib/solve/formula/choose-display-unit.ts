@@ -18,8 +18,9 @@ export function chooseDisplayUnit(m: Measure, system: UnitSystem, target?: strin
   if (target !== undefined) return inTarget(m, system, normalizeUnit(target));
   const listed = engineeringUnitsFor(m.dims, system);
   if (listed) {
-    const unit = m.hint !== undefined && listed.some((u) => sameUnit(u, m.hint ?? "")) ? m.hint : listed[0];
-    return express(m, unit);
+    const hint = m.hint;
+    const keep = hint !== undefined && (listed.includes(hint) || listed.some((u) => sameUnit(u, hint)));
+    return express(m, keep ? hint : listed[0]);
   }
   if (m.hint !== undefined) {
     const hinted = unitInfo(m.hint);

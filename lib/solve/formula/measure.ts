@@ -25,5 +25,8 @@ export function isDimensionless(dims: readonly number[]): boolean {
 
 /** A key for looking a dimension up in a table, e.g. `1,1,-2,0,0,0,0,0,0` for force. */
 export function dimsKey(dims: readonly number[]): string {
-  return dims.map((x) => String(Math.round(x * 1e6) / 1e6)).join(",");
+  // Called for every line; a plain loop keeps it allocation-light.
+  let key = "";
+  for (let i = 0; i < dims.length; i++) key += (i ? "," : "") + (Math.round(dims[i] * 1e6) / 1e6 || 0);
+  return key;
 }

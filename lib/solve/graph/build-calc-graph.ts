@@ -71,7 +71,7 @@ function indexCalcs(calcs: readonly GraphCalc[]): Map<string, number> {
     }
     if (byLabel.has(calc.label)) throw new SolveError("INVALID", `label ${calc.label} is used twice`, { path: `${path}.label` });
     byLabel.set(calc.label, i);
-    if (!Array.isArray(calc.references) || calc.references.some((r) => typeof r !== "string")) {
+    if (!Array.isArray(calc.references) || calc.references.some((r: unknown) => typeof r !== "string")) {
       throw new SolveError("INVALID", "references must be a list of labels", { path: `${path}.references` });
     }
   });

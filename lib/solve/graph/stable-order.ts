@@ -6,7 +6,7 @@
  * `edges[i]` lists what node i depends on.
  */
 export function stableOrder(edges: readonly (readonly number[])[], component: readonly number[]): number[] {
-  const count = Math.max(-1, ...component) + 1;
+  const count = component.reduce((m, c) => Math.max(m, c + 1), 0);
   const members: number[][] = Array.from({ length: count }, () => []);
   component.forEach((c, i) => members[c].push(i));
   const waitingOn = new Array<number>(count).fill(0);

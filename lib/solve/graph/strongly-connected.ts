@@ -41,12 +41,12 @@ export function stronglyConnected(count: number, edges: readonly (readonly numbe
         low[parent] = Math.min(low[parent], low[v]);
       }
       if (low[v] === index[v]) {
-        let w: number;
-        do {
-          w = stack.pop() as number;
+        // Everything above v on the stack belongs to v's component.
+        for (let w = -1; w !== v; ) {
+          w = stack.pop() ?? v;
           onStack[w] = false;
           component[w] = nextComponent;
-        } while (w !== v);
+        }
         nextComponent++;
       }
     }

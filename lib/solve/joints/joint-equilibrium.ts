@@ -5,6 +5,7 @@ import { forceSymbol } from "../geometry/force-symbol";
 import type { Comparison } from "../geometry/types";
 import type { Step, TrussModel } from "../types";
 import { balanceJoint } from "./balance-joint";
+import { checkKnownForces } from "./check-known-forces";
 import { jointContext } from "./joint-context";
 
 /** One joint to balance, with any member forces already found elsewhere. */
@@ -41,10 +42,7 @@ export function jointEquilibrium(model: TrussModel, options: JointEquilibriumOpt
     throw new SolveError("INVALID", `Joint ${options.joint} is not in the truss.`, { path: "joint" });
   }
   const known = options.known ?? {};
-  for (const [id, v] of Object.entries(known)) {
-    if (!model.members.some((m) => m.id === id)) throw new SolveError("INVALID", `Member ${id} is not in the truss.`, { path: `known.${id}` });
-    if (!Number.isFinite(v)) throw new SolveError("INVALID", `The known force in ${id} is not a finite number.`, { path: `known.${id}` });
-  }
+  checkKnownForces(model, known);
   const ctx = jointContext(model, options.loadCase);
   const balance = balanceJoint(ctx, options.joint, known);
   const steps = [...balance.steps];

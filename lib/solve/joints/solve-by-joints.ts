@@ -5,11 +5,16 @@ import type { Comparison } from "../geometry/types";
 import { escapeTex } from "../latex";
 import type { Step, TrussModel } from "../types";
 import { balanceJoint, type JointBalance } from "./balance-joint";
+import { checkKnownForces } from "./check-known-forces";
 import { jointContext, type JointContext } from "./joint-context";
 import { jointUnknowns } from "./joint-unknowns";
 
 /** Which load case to work through joint by joint. */
-export type SolveByJointsOptions = { loadCase: string };
+export type SolveByJointsOptions = {
+  loadCase: string;
+  /** Member forces found beforehand (e.g. by a section where the joints got stuck), carried in from the start. */
+  known?: Record<string, number>;
+};
 
 /** Where the joint-by-joint sequence could not go on. */
 export type JointsStuck = {
@@ -26,7 +31,7 @@ export type JointsStuck = {
 export type SolveByJointsResult = {
   /** Joints in the order they were solved. */
   order: string[];
-  /** Every member force found, tension positive. */
+  /** Every member force found (and those given in `known`), tension positive. */
   forces: Record<string, number>;
   /** Working per solved joint, in order. */
   joints: JointBalance[];
@@ -47,8 +52,10 @@ export type SolveByJointsResult = {
  * start the sequence.
  */
 export function solveByJoints(model: TrussModel, options: SolveByJointsOptions): SolveByJointsResult {
+  const given = options.known ?? {};
+  checkKnownForces(model, given);
   const ctx = jointContext(model, options.loadCase);
-  const forces: Record<string, number> = {};
+  const forces: Record<string, number> = { ...given };
   const solved: JointBalance[] = [];
   for (;;) {
     const next = model.joints.find((j) => {
@@ -68,7 +75,7 @@ export function solveByJoints(model: TrussModel, options: SolveByJointsOptions):
   const steps: Step[] = [
     {
       latex: `\\text{Method of joints, load case } \\mathrm{${escapeTex(options.loadCase)}}`,
-      text: `Method of joints, load case ${options.loadCase}: joints are taken in an order where each has at most two unknown member forces; reactions from the full solution; members assumed in tension.`,
+      text: `Method of joints, load case ${options.loadCase}: joints are taken in an order where each has at most two unknown member forces; reactions from the full solution; members assumed in tension.${Object.keys(given).length ? ` Known beforehand: ${Object.keys(given).join(", ")}.` : ""}`,
     },
     ...solved.flatMap((b) => b.steps),
     ...checks.flatMap((b) => b.steps),
@@ -76,6 +83,7 @@ export function solveByJoints(model: TrussModel, options: SolveByJointsOptions):
   if (stuck) steps.push({ latex: `\\text{Stopped: ${stuck.reason}}`, text: stuck.message });
   const comparison: Record<string, Comparison> = {};
   for (const [id, v] of Object.entries(forces)) {
+    if (Object.hasOwn(given, id)) continue;
     const stiffness = ctx.result.forces[id];
     if (!Number.isFinite(stiffness)) continue;
     comparison[id] = compareResults(v, stiffness, ctx.scale);

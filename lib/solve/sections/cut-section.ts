@@ -54,9 +54,10 @@ export type CutSectionResult = {
  * one equation that contains only that member.
  */
 export function cutSection(model: TrussModel, options: CutSectionOptions): CutSectionResult {
+  // Solving first also validates the model, so a cut is only judged on a sound truss.
+  const { loadCase, result } = solveCase(model, options.loadCase);
   const joints = indexJoints(model);
   const { keptJoints, otherJoints, cut } = resolveCut(model, joints, options.members, options.keep);
-  const { loadCase, result } = solveCase(model, options.loadCase);
   const units = modelUnits(model);
   const tol = lengthTolerance(model);
   const external = externalForces(loadCase, result, new Set(keptJoints));

@@ -1,4 +1,5 @@
 import { directionArrow } from "../geometry/direction-arrow";
+import { plainQty } from "../geometry/plain-qty";
 import type { ExternalForce, ModelUnits } from "../geometry/types";
 import { escapeTex } from "../latex";
 import type { Step } from "../types";
@@ -19,7 +20,8 @@ export function freeBodyStep(external: ExternalForce[], units: ModelUnits, what:
     for (const [axis, v] of [["x", f.fx], ["y", f.fy]] as const) {
       if (v === 0) continue;
       items.push(`${sym}_{${axis},\\mathrm{${j}}} = ${directionArrow(v, axis, units.force)}`);
-      words.push(`${f.kind} ${axis} at ${f.joint} ${Number(v.toPrecision(4))} ${units.force}`);
+      const way = axis === "x" ? (v > 0 ? "to the right" : "to the left") : v > 0 ? "upwards" : "downwards";
+      words.push(`${f.kind} at ${f.joint} ${plainQty(Math.abs(v), units.force)} ${way}`);
     }
   }
   return { latex: items.join(",\\quad "), text: `Forces on ${what}: ${words.join("; ")}.` };

@@ -9,8 +9,16 @@ export type TrussIndex = {
   end: Int32Array;
 };
 
-/** Positions of every joint and member end, so that the solver never looks ids up in its loops. */
+// Validation, the stability check and the solver all need the same index of one model object.
+const cache = new WeakMap<TrussModel, TrussIndex>();
+
+/**
+ * Positions of every joint and member end, so that the solver never looks ids
+ * up in its loops. Remembered per model object: treat models as immutable.
+ */
 export function indexTruss(model: TrussModel): TrussIndex {
+  const known = cache.get(model);
+  if (known) return known;
   const jointIndex = new Map<string, number>();
   model.joints.forEach((j, i) => jointIndex.set(j.id, i));
   const m = model.members.length;
@@ -20,5 +28,7 @@ export function indexTruss(model: TrussModel): TrussIndex {
     start[i] = jointIndex.get(member.start) ?? -1;
     end[i] = jointIndex.get(member.end) ?? -1;
   });
-  return { jointIndex, start, end };
+  const index = { jointIndex, start, end };
+  cache.set(model, index);
+  return index;
 }
