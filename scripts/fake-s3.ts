@@ -1,4 +1,5 @@
 import { mkdir } from "node:fs/promises";
+import { createServer } from "node:net";
 import S3rver from "s3rver";
 import type { RunningService } from "./fake-smtp";
 
@@ -11,6 +12,9 @@ export type FakeS3Options = { host: string; port: number; directory: string; buc
 
 export async function startFakeS3(options: FakeS3Options): Promise<RunningService> {
   await mkdir(options.directory, { recursive: true });
+  // s3rver has no listener for its server's 'error' event: a taken port would crash the process
+  // with a stack trace instead of an error we can report, so find out first.
+  await assertPortFree(options.host, options.port);
   const server = new S3rver({
     address: options.host,
     port: options.port,
@@ -20,4 +24,12 @@ export async function startFakeS3(options: FakeS3Options): Promise<RunningServic
   });
   await server.run();
   return { close: () => server.close() };
+}
+
+function assertPortFree(host: string, port: number): Promise<void> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once("error", reject);
+    probe.listen(port, host, () => probe.close(() => resolve()));
+  });
 }

@@ -34,8 +34,9 @@ export async function startFakeSmtp(options: FakeSmtpOptions): Promise<RunningSe
         .then(() => callback(), (error: unknown) => callback(error instanceof Error ? error : new Error(String(error))));
     },
   });
-  smtp.on("error", (error: Error) => console.error(`fake SMTP: ${error.message}`));
   await listen((done) => smtp.listen(options.smtpPort, options.host, done), (fail) => smtp.once("error", fail));
+  // Once listening, errors concern one connection: log them, keep serving.
+  smtp.on("error", (error: Error) => console.error(`fake SMTP: ${error.message}`));
 
   const api = createServer((req, res) => {
     handleApi(store, req, res).catch((error: unknown) => send(res, 500, { error: String(error) }));

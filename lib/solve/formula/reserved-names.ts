@@ -12,6 +12,7 @@ export const FORMULA_FUNCTIONS = {
 /** A function name of the formula syntax. */
 export type FormulaFunction = keyof typeof FORMULA_FUNCTIONS;
 
+/** True when `name` is one of the functions a formula may call. */
 export function isFormulaFunction(name: string): name is FormulaFunction {
   return Object.hasOwn(FORMULA_FUNCTIONS, name);
 }

@@ -1,6 +1,5 @@
 import type { z } from "zod";
 import { formatPath } from "./format-path";
-import { MAX_INPUT_MAGNITUDE } from "./truss-schema";
 
 const NOUNS: Record<string, string> = {
   number: "a finite number",
@@ -32,10 +31,9 @@ export function describeZodIssue(issue: z.core.$ZodIssue): { path: string; messa
         const what = LIST_NOUNS[path] ?? ["entry", "entries"];
         return { path, message: `A truss needs at least ${least} ${least === 1 ? what[0] : what[1]}; ${path} has ${got.replace("a list of ", "")}.` };
       }
-      if (issue.origin === "number" && Number(issue.minimum) === 0) return { path, message: `${path} must be greater than zero, but it is ${got}.` };
-      return { path, message: `${path} is ${got}, larger in magnitude than the ${MAX_INPUT_MAGNITUDE} this solver accepts.` };
+      return { path, message: `${path} is too short: ${issue.message}.` };
     case "too_big":
-      return { path, message: `${path} is ${got}, larger in magnitude than the ${MAX_INPUT_MAGNITUDE} this solver accepts.` };
+      return { path, message: `${path} is too long: ${issue.message}.` };
     case "invalid_value":
       return { path, message: `${path} must be one of ${issue.values.map((v) => `"${String(v)}"`).join(", ")}, but it is ${got}.` };
     case "custom":

@@ -1,6 +1,7 @@
 import { escapeTex, texQty } from "../latex";
 import type { LoadCase, Reaction, Step, TrussModel } from "../types";
 import { cleanRoundOff } from "./clean-round-off";
+import { indexTruss } from "./index-truss";
 import { MAX_WRITTEN_TERMS, termTotal, texSum, type TexTerm } from "./tex-sum";
 
 type Units = { L: string; F: string; M: string };
@@ -28,10 +29,10 @@ export function reactionSteps(model: TrussModel, loadCase: LoadCase, reactions: 
 }
 
 function loadPoints(model: TrussModel, loadCase: LoadCase): Point[] {
-  const joints = new Map(model.joints.map((j) => [j.id, j]));
+  const { jointIndex } = indexTruss(model);
   const byJoint = new Map<string, Point>();
   for (const load of loadCase.loads) {
-    const joint = joints.get(load.joint);
+    const joint = model.joints[jointIndex.get(load.joint) ?? -1];
     if (!joint) continue;
     const p = byJoint.get(joint.id) ?? { id: joint.id, x: joint.x, y: joint.y, fx: 0, fy: 0 };
     p.fx += load.fx ?? 0;
@@ -72,8 +73,9 @@ function collapse(terms: TexTerm[], unit: string, what: string): TexTerm[] {
 }
 
 function solvedSteps(model: TrussModel, pinId: string, rollerId: string, dir: [number, number], points: Point[], u: Units): Step[] | null {
-  const A = model.joints.find((j) => j.id === pinId);
-  const B = model.joints.find((j) => j.id === rollerId);
+  const { jointIndex } = indexTruss(model);
+  const A = model.joints[jointIndex.get(pinId) ?? -1];
+  const B = model.joints[jointIndex.get(rollerId) ?? -1];
   if (!A || !B) return null;
   const len = Math.hypot(dir[0], dir[1]);
   const nx = dir[0] / len;
@@ -124,8 +126,8 @@ function solvedSteps(model: TrussModel, pinId: string, rollerId: string, dir: [n
 }
 
 function checkSteps(model: TrussModel, points: Point[], reactions: Record<string, Reaction>, u: Units): Step[] {
-  const joints = new Map(model.joints.map((j) => [j.id, j]));
-  const supports = model.supports.map((s) => joints.get(s.joint)).filter((j) => j !== undefined);
+  const { jointIndex } = indexTruss(model);
+  const supports = model.supports.map((s) => model.joints[jointIndex.get(s.joint) ?? -1]).filter((j) => j !== undefined);
   const O = supports[0];
   const react = supports.map((j) => ({ id: j.id, x: j.x, y: j.y, ...(reactions[j.id] ?? { rx: 0, ry: 0 }) }));
   const mTerms: TexTerm[] = [];
