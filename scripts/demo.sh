@@ -40,7 +40,9 @@ pp_run bash scripts/ensure-system.sh postgresql chromium poppler-utils
 pp_start_pg demo
 pp_start_fakes demo
 pp_run npm run --silent db:migrate
-if [[ "$(node_modules/.bin/tsx scripts/has-seed.ts)" == 0 ]]; then
+# Assigned first so that a failing check stops the demo instead of silently skipping the seed.
+firms="$(node_modules/.bin/tsx scripts/has-seed.ts)"
+if [[ "$firms" == 0 ]]; then
   pp_log "seeding the demo data"
   pp_run npm run --silent db:seed
 fi

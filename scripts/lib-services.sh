@@ -41,18 +41,20 @@ pp_pg_bindir_for() {
 
 # Sets PG_DATA and PG_SOCKET (absolute) from PP_PG_DATA (default .data/pg) and PP_PG_SOCKET_DIR
 # (default .run/pg-socket). As root the server runs as `postgres`, which must reach these folders:
-# a clone under a private home (e.g. mode 700) cannot host them, so the defaults then move to a
-# per-clone folder under /tmp. Unix socket paths are limited to 107 bytes: same fallback.
+# a clone under a private home (e.g. /root, mode 700) cannot host them, so folders given relative
+# to the project then move to a per-clone folder under /tmp (absolute ones are taken as given).
+# Unix socket paths are limited to 107 bytes: a long default socket path moves there too.
+# shellcheck disable=SC2034 # PG_DATA and PG_SOCKET are this function's output, read by callers.
 pp_pg_paths() {
-  local fallback
+  local fallback data="${PP_PG_DATA:-.data/pg}" socket="${PP_PG_SOCKET_DIR:-.run/pg-socket}"
   fallback="${TMPDIR:-/tmp}/panelpoint-pg-$(printf '%s' "$PP_ROOT" | cksum | cut -d' ' -f1)"
-  PG_DATA="$(pp_abs "${PP_PG_DATA:-.data/pg}")"
-  PG_SOCKET="$(pp_abs "${PP_PG_SOCKET_DIR:-.run/pg-socket}")"
+  PG_DATA="$(pp_abs "$data")"
+  PG_SOCKET="$(pp_abs "$socket")"
   if pp_is_root && ! runuser -u postgres -- test -x "$PP_ROOT" 2>/dev/null; then
-    if [[ -z "${PP_PG_DATA:-}" ]]; then PG_DATA="$fallback/$(basename "$PG_DATA")"; fi
-    if [[ -z "${PP_PG_SOCKET_DIR:-}" ]]; then PG_SOCKET="$fallback/socket"; fi
+    if [[ "$data" != /* ]]; then PG_DATA="$fallback/$(basename "$data")"; fi
+    if [[ "$socket" != /* ]]; then PG_SOCKET="$fallback/socket"; fi
   fi
-  if [[ ${#PG_SOCKET} -gt 90 && -z "${PP_PG_SOCKET_DIR:-}" ]]; then PG_SOCKET="$fallback/socket"; fi
+  if [[ ${#PG_SOCKET} -gt 90 && "$socket" != /* ]]; then PG_SOCKET="$fallback/socket"; fi
 }
 
 # PostgreSQL refuses to run as root: root runs it as the `postgres` system user, anyone else as

@@ -83,7 +83,7 @@ cleanup() {
   rm -f .run/test-*.pid
   if [[ "$summary_printed" == 0 ]]; then
     # Set-up failed or the run was interrupted: still end with the line CI reads, never green.
-    record "set-up" 0 1 "stopped before the suites finished (status $status)"
+    record "run" 0 1 "stopped early: set-up failed or interrupted (status $status)"
     print_summary
   fi
   if [[ "$status" == 0 && "$total_failed" != 0 ]]; then status=1; fi

@@ -34,7 +34,7 @@ async function script(name: "db-start.sh" | "db-stop.sh", extra: Record<string, 
     cwd: root,
     env: { ...process.env, ...settings, ...extra },
   });
-  return stdout.trim();
+  return rememberDataPath(stdout.trim());
 }
 
 async function query(sql: string): Promise<pg.QueryResult> {
@@ -47,8 +47,18 @@ async function query(sql: string): Promise<pg.QueryResult> {
   }
 }
 
+// Where the cluster really lives, from the script's own line: as root in a clone the postgres user
+// cannot enter, db-start.sh moves it under /tmp.
+let dataPath = path.join(root, dataDir);
+
+function rememberDataPath(line: string): string {
+  const match = /\(data (.+?)\):/.exec(line);
+  if (match) dataPath = path.resolve(root, match[1]);
+  return line;
+}
+
 function postmasterPid(): number {
-  return Number(readFileSync(path.join(root, dataDir, "postmaster.pid"), "utf8").split("\n")[0]);
+  return Number(readFileSync(path.join(dataPath, "postmaster.pid"), "utf8").split("\n")[0]);
 }
 
 function alive(pid: number): boolean {
@@ -63,7 +73,7 @@ function alive(pid: number): boolean {
 
 afterAll(async () => {
   await script("db-stop.sh");
-  rmSync(path.join(root, dataDir), { recursive: true, force: true });
+  rmSync(dataPath, { recursive: true, force: true });
 });
 
 describe("scripts/db-start.sh", () => {

@@ -1,7 +1,7 @@
 import { SolveError } from "../errors";
 import { factorBandLdlt, type BandLdlt } from "../sparse/factor-band-ldlt";
 import type { TrussModel } from "../types";
-import { assembleStiffness } from "./assemble-stiffness";
+import { assembleStiffness, memberCoefficients, type MemberCoefficients } from "./assemble-stiffness";
 import { describeMechanism } from "./describe-mechanism";
 import { indexTruss, type TrussIndex } from "./index-truss";
 import { mechanismJoints } from "./mechanism-joints";
@@ -26,6 +26,7 @@ export type StabilityAnalysis = {
   index: TrussIndex;
   geometry: MemberGeometry;
   dofs: DofNumbering;
+  coefficients: MemberCoefficients;
   /** Factor of the stiffness with unit axial stiffness in every member. */
   unitFactor: BandLdlt;
 };
@@ -52,7 +53,8 @@ export function analyseStability(model: TrussModel): StabilityAnalysis {
   const index = indexTruss(model);
   const geometry = memberGeometry(model, index);
   const dofs = numberDofs(model, index);
-  const K = assembleStiffness(index, geometry, dofs, new Float64Array(m).fill(1));
+  const coefficients = memberCoefficients(index, geometry, dofs);
+  const K = assembleStiffness(coefficients, dofs, new Float64Array(m).fill(1));
   const unitFactor = factorBandLdlt(K, { pivotTolerance: MECHANISM_PIVOT_TOLERANCE });
   const tally = `m + r = ${m} + ${r} = ${m + r}`;
   if (unitFactor.zeroPivots.length > 0 || m + r < 2 * j) {
@@ -62,7 +64,7 @@ export function analyseStability(model: TrussModel): StabilityAnalysis {
     throw new SolveError("UNSTABLE", `The truss is unstable: ${why}. Joints that can move: ${listJoints(joints)}.`, { joints });
   }
   const classification = m + r === 2 * j ? "determinate" : "indeterminate";
-  return { counts: { m, r, j, classification }, index, geometry, dofs, unitFactor };
+  return { counts: { m, r, j, classification }, index, geometry, dofs, coefficients, unitFactor };
 }
 
 function freeJoints(dofs: DofNumbering, j: number): number[] {

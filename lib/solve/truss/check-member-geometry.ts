@@ -59,37 +59,41 @@ function firstOverlap(model: TrussModel, index: TrussIndex, lengths: Float64Arra
   minY -= 0.29 * h;
   const rows = Math.floor(extent / h) + 4;
   const cellOf = new Map<number, number>();
-  const pairCell: number[] = [];
-  const pairMember: number[] = [];
+  let pairCell = new Int32Array(4 * m);
+  let pairMember = new Int32Array(4 * m);
+  let pairs = 0;
   for (let i = 0; i < m; i++) {
-    const x0 = Math.floor((Math.min(seg.ax[i], seg.bx[i]) - minX - eps) / h);
-    const x1 = Math.floor((Math.max(seg.ax[i], seg.bx[i]) - minX + eps) / h);
-    const y0 = Math.floor((Math.min(seg.ay[i], seg.by[i]) - minY - eps) / h);
-    const y1 = Math.floor((Math.max(seg.ay[i], seg.by[i]) - minY + eps) / h);
+    const x0 = Math.floor((seg.minX[i] - minX - eps) / h);
+    const x1 = Math.floor((seg.maxX[i] - minX + eps) / h);
+    const y0 = Math.floor((seg.minY[i] - minY - eps) / h);
+    const y1 = Math.floor((seg.maxY[i] - minY + eps) / h);
     for (let cx = x0; cx <= x1; cx++) {
       for (let cy = y0; cy <= y1; cy++) {
         const key = cx * rows + cy;
         let cell = cellOf.get(key);
         if (cell === undefined) { cell = cellOf.size; cellOf.set(key, cell); }
-        pairCell.push(cell);
-        pairMember.push(i);
+        if (pairs === pairCell.length) { pairCell = grow(pairCell); pairMember = grow(pairMember); }
+        pairCell[pairs] = cell;
+        pairMember[pairs++] = i;
       }
     }
   }
   // Members of each cell, in member order (a counting sort keeps the order).
-  const starts = new Int32Array(cellOf.size + 1);
-  for (const c of pairCell) starts[c + 1]++;
-  for (let c = 0; c < cellOf.size; c++) starts[c + 1] += starts[c];
-  const fill = starts.slice(0, cellOf.size);
-  const inCell = new Int32Array(pairCell.length);
-  for (let k = 0; k < pairCell.length; k++) inCell[fill[pairCell[k]]++] = pairMember[k];
+  const cells = cellOf.size;
+  const starts = new Int32Array(cells + 1);
+  for (let k = 0; k < pairs; k++) starts[pairCell[k] + 1]++;
+  for (let c = 0; c < cells; c++) starts[c + 1] += starts[c];
+  const fill = starts.slice(0, cells);
+  const inCell = new Int32Array(pairs);
+  for (let k = 0; k < pairs; k++) inCell[fill[pairCell[k]]++] = pairMember[k];
   let best: [number, number] | null = null;
-  for (let c = 0; c < cellOf.size; c++) {
+  for (let c = 0; c < cells; c++) {
     for (let q = starts[c] + 1; q < starts[c + 1]; q++) {
+      const j = inCell[q];
+      if (best && j > best[1]) continue;
       for (let p = starts[c]; p < q; p++) {
         const i = inCell[p];
-        const j = inCell[q];
-        if (best && (j > best[1] || (j === best[1] && i >= best[0]))) continue;
+        if (best && j === best[1] && i >= best[0]) break;
         if (overlaps(seg, i, j, eps)) best = [i, j];
       }
     }
@@ -97,27 +101,48 @@ function firstOverlap(model: TrussModel, index: TrussIndex, lengths: Float64Arra
   return best;
 }
 
-type Segments = { ax: Float64Array; ay: Float64Array; bx: Float64Array; by: Float64Array; length: Float64Array };
+function grow(a: Int32Array<ArrayBuffer>): Int32Array<ArrayBuffer> {
+  const b = new Int32Array(a.length * 2);
+  b.set(a);
+  return b;
+}
+
+type Segments = {
+  ax: Float64Array; ay: Float64Array; ux: Float64Array; uy: Float64Array; length: Float64Array;
+  minX: Float64Array; maxX: Float64Array; minY: Float64Array; maxY: Float64Array;
+};
 
 function segments(model: TrussModel, index: TrussIndex, length: Float64Array): Segments {
   const m = length.length;
-  const s: Segments = { ax: new Float64Array(m), ay: new Float64Array(m), bx: new Float64Array(m), by: new Float64Array(m), length };
+  const f = () => new Float64Array(m);
+  const s: Segments = { ax: f(), ay: f(), ux: f(), uy: f(), length, minX: f(), maxX: f(), minY: f(), maxY: f() };
   for (let e = 0; e < m; e++) {
     const a = model.joints[index.start[e]];
     const b = model.joints[index.end[e]];
-    s.ax[e] = a.x; s.ay[e] = a.y; s.bx[e] = b.x; s.by[e] = b.y;
+    s.ax[e] = a.x;
+    s.ay[e] = a.y;
+    s.ux[e] = (b.x - a.x) / length[e];
+    s.uy[e] = (b.y - a.y) / length[e];
+    s.minX[e] = Math.min(a.x, b.x);
+    s.maxX[e] = Math.max(a.x, b.x);
+    s.minY[e] = Math.min(a.y, b.y);
+    s.maxY[e] = Math.max(a.y, b.y);
   }
   return s;
 }
 
+/** Member q lies on member p's line (within eps at both ends) and their spans share more than eps. */
 function overlaps(s: Segments, p: number, q: number, eps: number): boolean {
-  const ux = (s.bx[p] - s.ax[p]) / s.length[p];
-  const uy = (s.by[p] - s.ay[p]) / s.length[p];
-  const off1 = ux * (s.ay[q] - s.ay[p]) - uy * (s.ax[q] - s.ax[p]);
-  const off2 = ux * (s.by[q] - s.ay[p]) - uy * (s.bx[q] - s.ax[p]);
-  if (Math.abs(off1) > eps || Math.abs(off2) > eps) return false;
-  const t1 = ux * (s.ax[q] - s.ax[p]) + uy * (s.ay[q] - s.ay[p]);
-  const t2 = ux * (s.bx[q] - s.ax[p]) + uy * (s.by[q] - s.ay[p]);
+  if (s.minX[q] > s.maxX[p] + eps || s.maxX[q] < s.minX[p] - eps || s.minY[q] > s.maxY[p] + eps || s.maxY[q] < s.minY[p] - eps) return false;
+  const ux = s.ux[p];
+  const uy = s.uy[p];
+  const q1x = s.ax[q] - s.ax[p];
+  const q1y = s.ay[q] - s.ay[p];
+  const q2x = q1x + s.ux[q] * s.length[q];
+  const q2y = q1y + s.uy[q] * s.length[q];
+  if (Math.abs(ux * q1y - uy * q1x) > eps || Math.abs(ux * q2y - uy * q2x) > eps) return false;
+  const t1 = ux * q1x + uy * q1y;
+  const t2 = ux * q2x + uy * q2y;
   const shared = Math.min(s.length[p], Math.max(t1, t2)) - Math.max(0, Math.min(t1, t2));
   return shared > eps;
 }

@@ -18,13 +18,14 @@ export function checkReferences(model: TrussModel, index: TrussIndex): void {
   }
 
   const members = new Set<string>();
-  model.members.forEach((member, i) => {
+  for (let i = 0; i < model.members.length; i++) {
+    const member = model.members[i];
     if (members.has(member.id)) fail(`members[${i}].id`, `Member id "${member.id}" is used twice; each member needs its own id.`);
     members.add(member.id);
     if (index.start[i] < 0) fail(`members[${i}].start`, `Member ${member.id} starts at joint "${member.start}", which does not exist.`);
     if (index.end[i] < 0) fail(`members[${i}].end`, `Member ${member.id} ends at joint "${member.end}", which does not exist.`);
     if (member.start === member.end) fail(`members[${i}].end`, `Member ${member.id} starts and ends at the same joint ${member.start}.`);
-  });
+  }
 
   const supported = new Set<string>();
   model.supports.forEach((support, i) => {
@@ -41,9 +42,10 @@ export function checkReferences(model: TrussModel, index: TrussIndex): void {
   model.loadCases.forEach((loadCase, c) => {
     if (cases.has(loadCase.id)) fail(`loadCases[${c}].id`, `Load case id "${loadCase.id}" is used twice; each load case needs its own id.`);
     cases.add(loadCase.id);
-    loadCase.loads.forEach((load, k) => {
+    for (let k = 0; k < loadCase.loads.length; k++) {
+      const load = loadCase.loads[k];
       if (!jointIndex.has(load.joint)) fail(`loadCases[${c}].loads[${k}].joint`, `Load ${k + 1} of case ${loadCase.id} is on joint "${load.joint}", which does not exist.`);
-    });
+    }
   });
 }
 

@@ -20,14 +20,14 @@ export function indexTruss(model: TrussModel): TrussIndex {
   const known = cache.get(model);
   if (known) return known;
   const jointIndex = new Map<string, number>();
-  model.joints.forEach((j, i) => jointIndex.set(j.id, i));
+  for (let i = 0; i < model.joints.length; i++) jointIndex.set(model.joints[i].id, i);
   const m = model.members.length;
   const start = new Int32Array(m);
   const end = new Int32Array(m);
-  model.members.forEach((member, i) => {
-    start[i] = jointIndex.get(member.start) ?? -1;
-    end[i] = jointIndex.get(member.end) ?? -1;
-  });
+  for (let i = 0; i < m; i++) {
+    start[i] = jointIndex.get(model.members[i].start) ?? -1;
+    end[i] = jointIndex.get(model.members[i].end) ?? -1;
+  }
   const index = { jointIndex, start, end };
   cache.set(model, index);
   return index;

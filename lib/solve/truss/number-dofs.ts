@@ -53,10 +53,11 @@ export function numberDofs(model: TrussModel, index: TrussIndex): DofNumbering {
   const order = reverseCuthillMcKee(buildAdjacency(j, index.start, index.end));
   const dof1 = new Int32Array(j).fill(-1);
   const dof2 = new Int32Array(j).fill(-1);
-  const jointOf: number[] = [];
+  const jointOf = new Int32Array(2 * j);
+  let n = 0;
   for (const k of order) {
-    if (free1[k]) { dof1[k] = jointOf.length; jointOf.push(k); }
-    if (free2[k]) { dof2[k] = jointOf.length; jointOf.push(k); }
+    if (free1[k]) { dof1[k] = n; jointOf[n++] = k; }
+    if (free2[k]) { dof2[k] = n; jointOf[n++] = k; }
   }
   let bandwidth = 0;
   for (let e = 0; e < index.start.length; e++) {
@@ -68,7 +69,7 @@ export function numberDofs(model: TrussModel, index: TrussIndex): DofNumbering {
   }
   // A joint's own two components are coupled even when no member links it to another.
   for (let k = 0; k < j; k++) if (dof1[k] >= 0 && dof2[k] >= 0) bandwidth = Math.max(bandwidth, 1);
-  return { n: jointOf.length, dof1, dof2, e1x, e1y, e2x, e2y, jointOf: Int32Array.from(jointOf), bandwidth };
+  return { n, dof1, dof2, e1x, e1y, e2x, e2y, jointOf: jointOf.slice(0, n), bandwidth };
 }
 
 function firstDof(a: number, b: number): number {

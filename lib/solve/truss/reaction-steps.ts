@@ -2,7 +2,7 @@ import { escapeTex, texQty } from "../latex";
 import type { LoadCase, Reaction, Step, TrussModel } from "../types";
 import { cleanRoundOff } from "./clean-round-off";
 import { indexTruss } from "./index-truss";
-import { MAX_WRITTEN_TERMS, termTotal, texSum, type TexTerm } from "./tex-sum";
+import { MAX_WRITTEN_TERMS, termTotal, texFactor, texSum, type TexTerm } from "./tex-sum";
 
 type Units = { L: string; F: string; M: string };
 type Point = { id: string; x: number; y: number; fx: number; fy: number };
@@ -47,7 +47,7 @@ function sym(id: string, comp?: "x" | "y"): string {
   return `R_{\\mathrm{${escapeTex(id)}}${comp ? `,${comp}` : ""}}`;
 }
 
-const q = (v: number, unit: string) => `(${texQty(v, unit)})`;
+const q = texFactor;
 
 /** Moment terms of the loads about (x0, y0), counter-clockwise positive; collapsed to a total when there are many. */
 function loadMoments(points: Point[], x0: number, y0: number, u: Units): TexTerm[] {
@@ -55,21 +55,21 @@ function loadMoments(points: Point[], x0: number, y0: number, u: Units): TexTerm
   for (const p of points) {
     const dx = p.x - x0;
     const dy = p.y - y0;
-    if (p.fy !== 0 && dx !== 0) terms.push({ body: () => `${q(p.fy, u.F)}${q(dx, u.L)}`, sign: 1, value: p.fy * dx });
-    if (p.fx !== 0 && dy !== 0) terms.push({ body: () => `${q(p.fx, u.F)}${q(dy, u.L)}`, sign: -1, value: p.fx * dy });
+    if (p.fy !== 0 && dx !== 0) terms.push({ factors: [[p.fy, u.F], [dx, u.L]], sign: 1, value: p.fy * dx });
+    if (p.fx !== 0 && dy !== 0) terms.push({ factors: [[p.fx, u.F], [dy, u.L]], sign: -1, value: p.fx * dy });
   }
   return collapse(terms, u.M, "load moments");
 }
 
 function loadForces(points: Point[], comp: "fx" | "fy", u: Units): TexTerm[] {
-  const terms = points.filter((p) => p[comp] !== 0).map((p): TexTerm => ({ body: () => q(p[comp], u.F), sign: 1, value: p[comp] }));
+  const terms = points.filter((p) => p[comp] !== 0).map((p): TexTerm => ({ factors: [[p[comp], u.F]], sign: 1, value: p[comp] }));
   return collapse(terms, u.F, "loads");
 }
 
 function collapse(terms: TexTerm[], unit: string, what: string): TexTerm[] {
   if (terms.length <= MAX_WRITTEN_TERMS) return terms;
   const total = termTotal(terms);
-  return [{ body: () => `\\underbrace{${q(total, unit)}}_{\\text{${terms.length} ${what}}}`, sign: 1, value: total }];
+  return [{ tex: `\\underbrace{${q(total, unit)}}_{\\text{${terms.length} ${what}}}`, sign: 1, value: total }];
 }
 
 function solvedSteps(model: TrussModel, pinId: string, rollerId: string, dir: [number, number], points: Point[], u: Units): Step[] | null {
@@ -94,9 +94,9 @@ function solvedSteps(model: TrussModel, pinId: string, rollerId: string, dir: [n
   const RBy = R * ny;
   const unknown = axis ? sym(B.id, axis) : sym(B.id);
   const shown = axis === "y" ? RBy : axis === "x" ? RBx : R;
-  const rollerTerm: TexTerm = axis === "y" ? { body: () => `${unknown}\\,${q(dx, u.L)}`, sign: 1, value: RBy * dx }
-    : axis === "x" ? { body: () => `${unknown}\\,${q(dy, u.L)}`, sign: -1, value: RBx * dy }
-    : { body: () => `${unknown}\\,${q(arm, u.L)}`, sign: 1, value: R * arm };
+  const rollerTerm: TexTerm = axis === "y" ? { tex: `${unknown}\\,`, factors: [[dx, u.L]], sign: 1, value: RBy * dx }
+    : axis === "x" ? { tex: `${unknown}\\,`, factors: [[dy, u.L]], sign: -1, value: RBx * dy }
+    : { tex: `${unknown}\\,`, factors: [[arm, u.L]], sign: 1, value: R * arm };
   const forceScale = points.reduce((m, p) => Math.max(m, Math.hypot(p.fx, p.fy)), 0);
   const clean = (v: number) => cleanRoundOff(v, forceScale);
   const found = axis === "y" ? `its vertical component is ${plain(clean(shown))} ${u.F}`
@@ -108,18 +108,18 @@ function solvedSteps(model: TrussModel, pinId: string, rollerId: string, dir: [n
   };
   const fxTerms = loadForces(points, "fx", u);
   const fyTerms = loadForces(points, "fy", u);
-  const rollerX: TexTerm[] = axis === "y" || RBx === 0 ? [] : [{ body: () => q(clean(RBx), u.F), sign: 1, value: RBx }];
-  const rollerY: TexTerm[] = axis === "x" || RBy === 0 ? [] : [{ body: () => q(clean(RBy), u.F), sign: 1, value: RBy }];
+  const rollerX: TexTerm[] = axis === "y" || RBx === 0 ? [] : [{ factors: [[clean(RBx), u.F]], sign: 1, value: RBx }];
+  const rollerY: TexTerm[] = axis === "x" || RBy === 0 ? [] : [{ factors: [[clean(RBy), u.F]], sign: 1, value: RBy }];
   const RAx = clean(-(termTotal(rollerX) + termTotal(fxTerms)));
   const RAy = clean(-(termTotal(rollerY) + termTotal(fyTerms)));
   const ax = sym(A.id, "x");
   const ay = sym(A.id, "y");
   const stepX: Step = {
-    latex: `\\textstyle\\sum F_x = 0:\\quad ${texSum([{ body: () => ax, sign: 1, value: 0 }, ...rollerX, ...fxTerms])} = 0\\;\\Rightarrow\\; ${ax} = ${texQty(RAx, u.F)}`,
+    latex: `\\textstyle\\sum F_x = 0:\\quad ${texSum([{ tex: ax, sign: 1, value: 0 }, ...rollerX, ...fxTerms])} = 0\\;\\Rightarrow\\; ${ax} = ${texQty(RAx, u.F)}`,
     text: `Horizontal equilibrium gives the horizontal reaction at ${A.id}: ${plain(RAx)} ${u.F}.`,
   };
   const stepY: Step = {
-    latex: `\\textstyle\\sum F_y = 0:\\quad ${texSum([{ body: () => ay, sign: 1, value: 0 }, ...rollerY, ...fyTerms])} = 0\\;\\Rightarrow\\; ${ay} = ${texQty(RAy, u.F)}`,
+    latex: `\\textstyle\\sum F_y = 0:\\quad ${texSum([{ tex: ay, sign: 1, value: 0 }, ...rollerY, ...fyTerms])} = 0\\;\\Rightarrow\\; ${ay} = ${texQty(RAy, u.F)}`,
     text: `Vertical equilibrium gives the vertical reaction at ${A.id}: ${plain(RAy)} ${u.F}.`,
   };
   return [stepM, stepX, stepY];
@@ -134,13 +134,13 @@ function checkSteps(model: TrussModel, points: Point[], reactions: Record<string
   for (const r of react) {
     const dx = r.x - O.x;
     const dy = r.y - O.y;
-    if (r.ry !== 0 && dx !== 0) mTerms.push({ body: () => `${q(r.ry, u.F)}${q(dx, u.L)}`, sign: 1, value: r.ry * dx });
-    if (r.rx !== 0 && dy !== 0) mTerms.push({ body: () => `${q(r.rx, u.F)}${q(dy, u.L)}`, sign: -1, value: r.rx * dy });
+    if (r.ry !== 0 && dx !== 0) mTerms.push({ factors: [[r.ry, u.F], [dx, u.L]], sign: 1, value: r.ry * dx });
+    if (r.rx !== 0 && dy !== 0) mTerms.push({ factors: [[r.rx, u.F], [dy, u.L]], sign: -1, value: r.rx * dy });
   }
   const reactionM = collapse(mTerms, u.M, "reaction moments");
   const moment = [...reactionM, ...loadMoments(points, O.x, O.y, u)];
-  const fx = [...collapse(react.filter((r) => r.rx !== 0).map((r): TexTerm => ({ body: () => q(r.rx, u.F), sign: 1, value: r.rx })), u.F, "reactions"), ...loadForces(points, "fx", u)];
-  const fy = [...collapse(react.filter((r) => r.ry !== 0).map((r): TexTerm => ({ body: () => q(r.ry, u.F), sign: 1, value: r.ry })), u.F, "reactions"), ...loadForces(points, "fy", u)];
+  const fx = [...collapse(react.filter((r) => r.rx !== 0).map((r): TexTerm => ({ factors: [[r.rx, u.F]], sign: 1, value: r.rx })), u.F, "reactions"), ...loadForces(points, "fx", u)];
+  const fy = [...collapse(react.filter((r) => r.ry !== 0).map((r): TexTerm => ({ factors: [[r.ry, u.F]], sign: 1, value: r.ry })), u.F, "reactions"), ...loadForces(points, "fy", u)];
   const residual = (terms: TexTerm[], unit: string) => texQty(cleanRoundOff(termTotal(terms), terms.reduce((m, t) => Math.max(m, Math.abs(t.value)), 0)), unit);
   const layout = `The ${supports.length} supports (${model.supports.map((s) => `${s.type} at ${s.joint}`).join(", ")}) are not one pin and one roller, so the reactions come from the stiffness solution`;
   return [

@@ -2,7 +2,7 @@ import { solveBandLdlt } from "../sparse/solve-band-ldlt";
 import type { BandLdlt } from "../sparse/factor-band-ldlt";
 import { SolveError } from "../errors";
 import type { CaseResult, Displacement, Reaction, TrussModel } from "../types";
-import { memberVector } from "./assemble-stiffness";
+import type { MemberCoefficients } from "./assemble-stiffness";
 import { cleanRoundOff } from "./clean-round-off";
 import type { TrussIndex } from "./index-truss";
 import type { JointLoadTotals } from "./joint-loads";
@@ -16,6 +16,7 @@ export type CaseSolveContext = {
   index: TrussIndex;
   geometry: MemberGeometry;
   dofs: DofNumbering;
+  coefficients: MemberCoefficients;
   factor: BandLdlt;
   /** Axial stiffness k of each member used in the factor. */
   axial: Float64Array;
@@ -38,17 +39,15 @@ export function recoverCaseResult(ctx: CaseSolveContext, loads: JointLoadTotals)
     if (dofs.dof2[k] >= 0) rhs[dofs.dof2[k]] = loads.fx[k] * dofs.e2x[k] + loads.fy[k] * dofs.e2y[k];
   }
   const x = solveBandLdlt(ctx.factor, rhs);
-  const eq = new Int32Array(4);
-  const v = new Float64Array(4);
+  const { eq, v } = ctx.coefficients;
   const force = new Float64Array(ctx.axial.length);
   const rx = Float64Array.from(loads.fx, (f) => -f);
   const ry = Float64Array.from(loads.fy, (f) => -f);
   let scale = 0;
   for (let k = 0; k < jCount; k++) scale = Math.max(scale, Math.abs(loads.fx[k]), Math.abs(loads.fy[k]));
   for (let e = 0; e < force.length; e++) {
-    memberVector(index, geometry, dofs, e, eq, v);
     let elongation = 0;
-    for (let p = 0; p < 4; p++) if (eq[p] >= 0) elongation += v[p] * x[eq[p]];
+    for (let p = 4 * e; p < 4 * e + 4; p++) if (eq[p] >= 0) elongation += v[p] * x[eq[p]];
     const N = ctx.axial[e] * elongation;
     force[e] = N;
     scale = Math.max(scale, Math.abs(N));
@@ -76,7 +75,7 @@ export function recoverCaseResult(ctx: CaseSolveContext, loads: JointLoadTotals)
     r.rx = finite(cleanRoundOff(r.rx, scale));
     r.ry = finite(cleanRoundOff(r.ry, scale));
   }
-  model.members.forEach((member, e) => (result.forces[member.id] = finite(cleanRoundOff(force[e], scale))));
+  for (let e = 0; e < force.length; e++) result.forces[model.members[e].id] = finite(cleanRoundOff(force[e], scale));
   if (ctx.withDisplacements) result.displacements = displacements(x, ctx);
   return result;
 }
@@ -86,7 +85,8 @@ function displacements(x: Float64Array, ctx: CaseSolveContext): Record<string, D
   let scale = 0;
   for (let k = 0; k < ux.length; k++) scale = Math.max(scale, Math.abs(ux[k]), Math.abs(uy[k]));
   const out: Record<string, Displacement> = {};
-  ctx.model.joints.forEach((joint, k) => (out[joint.id] = { ux: finite(cleanRoundOff(ux[k], scale)), uy: finite(cleanRoundOff(uy[k], scale)) }));
+  const { joints } = ctx.model;
+  for (let k = 0; k < joints.length; k++) out[joints[k].id] = { ux: finite(cleanRoundOff(ux[k], scale)), uy: finite(cleanRoundOff(uy[k], scale)) };
   return out;
 }
 

@@ -26,7 +26,7 @@ const STIFFNESS_PIVOT_TOLERANCE = 1e-14;
 export function solveTruss(model: TrussModel): TrussSolution {
   const clean = validateTruss(model);
   const analysis = analyseStability(clean);
-  const { counts, index, geometry, dofs } = analysis;
+  const { counts, index, geometry, dofs, coefficients } = analysis;
   const missing = clean.members.findIndex((mem) => mem.A === undefined || mem.E === undefined);
   if (missing >= 0 && counts.classification === "indeterminate") {
     const member = clean.members[missing];
@@ -42,13 +42,13 @@ export function solveTruss(model: TrussModel): TrussSolution {
     ? Float64Array.from(clean.members, (mem, e) => ((mem.A ?? 1) * (mem.E ?? 1)) / geometry.length[e])
     : new Float64Array(clean.members.length).fill(1);
   const factor = withDisplacements
-    ? factorBandLdlt(assembleStiffness(index, geometry, dofs, axial), { pivotTolerance: STIFFNESS_PIVOT_TOLERANCE })
+    ? factorBandLdlt(assembleStiffness(coefficients, dofs, axial), { pivotTolerance: STIFFNESS_PIVOT_TOLERANCE })
     : analysis.unitFactor;
   if (factor.zeroPivots.length > 0) {
     const joints = [...new Set(factor.zeroPivots.map((row) => clean.joints[dofs.jointOf[row]].id))];
     throw new SolveError("UNSTABLE", `The stiffness equations are singular with these areas and moduli at joints ${joints.slice(0, 12).join(", ")}; check for members far stiffer or softer than the rest.`, { joints });
   }
-  const ctx: CaseSolveContext = { model: clean, index, geometry, dofs, factor, axial, withDisplacements };
+  const ctx: CaseSolveContext = { model: clean, index, geometry, dofs, coefficients, factor, axial, withDisplacements };
   const cases: Record<string, CaseResult> = {};
   for (const loadCase of clean.loadCases) cases[loadCase.id] = recoverCaseResult(ctx, jointLoads(loadCase, index, clean.joints.length));
   const first = clean.loadCases[0];
