@@ -17,9 +17,13 @@ export type FactorBandLdltOptions = {
  * factorization could go on and reveal every independent singular direction.
  */
 export type BandLdlt = {
+  /** Order of the matrix. */
   n: number;
+  /** Half-bandwidth, as in the factored matrix. */
   b: number;
+  /** L below the diagonal and D on it, in the band layout of `BandMatrix`. */
   data: Float64Array;
+  /** Rows whose pivot vanished, in elimination order. */
   zeroPivots: number[];
 };
 

@@ -23,9 +23,13 @@ export type TrussCount = {
 /** What the stability check learned, kept so that the solver does not repeat it. */
 export type StabilityAnalysis = {
   counts: TrussCount;
+  /** Joint positions of every member end. */
   index: TrussIndex;
+  /** Member lengths and directions. */
   geometry: MemberGeometry;
+  /** Equation numbers, in reverse Cuthill–McKee order. */
   dofs: DofNumbering;
+  /** Elongation coefficients, shared by every stiffness assembled for this model. */
   coefficients: MemberCoefficients;
   /** Factor of the stiffness with unit axial stiffness in every member. */
   unitFactor: BandLdlt;

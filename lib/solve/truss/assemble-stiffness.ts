@@ -1,4 +1,4 @@
-import { addToBand, createBandMatrix, type BandMatrix } from "../sparse/band-matrix";
+import { createBandMatrix, type BandMatrix } from "../sparse/band-matrix";
 import type { TrussIndex } from "./index-truss";
 import type { MemberGeometry } from "./member-geometry";
 import type { DofNumbering } from "./number-dofs";
@@ -42,14 +42,20 @@ export function memberCoefficients(index: TrussIndex, geometry: MemberGeometry, 
 export function assembleStiffness(coefficients: MemberCoefficients, dofs: DofNumbering, axial: Float64Array): BandMatrix {
   const K = createBandMatrix(dofs.n, dofs.bandwidth);
   const { eq, v } = coefficients;
+  const { data, b } = K;
+  const w = b + 1;
   for (let e = 0; e < axial.length; e++) {
     const k = axial[e];
     const o = 4 * e;
     for (let p = o; p < o + 4; p++) {
-      if (eq[p] < 0) continue;
+      const ip = eq[p];
+      if (ip < 0) continue;
       for (let q = o; q <= p; q++) {
-        // Band storage keeps one value for (p, q) and (q, p), so each pair is added once.
-        if (eq[q] >= 0) addToBand(K, eq[p], eq[q], k * v[p] * v[q]);
+        const iq = eq[q];
+        if (iq < 0) continue;
+        // Band storage keeps one value for (p, q) and (q, p), so each pair is added once, in the lower triangle.
+        const row = ip > iq ? ip : iq;
+        data[row * w + (ip + iq - row) - row + b] += k * v[p] * v[q];
       }
     }
   }

@@ -48,30 +48,42 @@ function modelExtent(model: TrussModel): number {
 function firstOverlap(model: TrussModel, index: TrussIndex, lengths: Float64Array, eps: number): [number, number] | null {
   const seg = segments(model, index, lengths);
   const m = lengths.length;
-  const sorted = Float64Array.from(lengths).sort();
+  let mean = 0, longest = 0;
+  for (let e = 0; e < m; e++) { mean += lengths[e] / m; longest = Math.max(longest, lengths[e]); }
   const extent = eps / GEOMETRY_TOLERANCE;
   // Cells a little longer than the typical member keep cells per member and members per cell small;
   // the odd factor and shifted origin keep regular panel points off the cell edges.
-  const h = Math.max(1.37 * sorted[m >> 1], sorted[m - 1] / 8, extent / 1e6);
-  let minX = Infinity, minY = Infinity;
-  for (const j of model.joints) { minX = Math.min(minX, j.x); minY = Math.min(minY, j.y); }
+  const h = Math.max(1.37 * mean, longest / 8, extent / 1e6);
+  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  for (const j of model.joints) {
+    minX = Math.min(minX, j.x); maxX = Math.max(maxX, j.x);
+    minY = Math.min(minY, j.y); maxY = Math.max(maxY, j.y);
+  }
   minX -= 0.29 * h;
   minY -= 0.29 * h;
-  const rows = Math.floor(extent / h) + 4;
+  const cols = Math.floor((maxX - minX + eps) / h) + 2;
+  const rows = Math.floor((maxY - minY + eps) / h) + 2;
+  // A dense table of cells when the grid is small (long trusses), a map otherwise.
+  const table = cols * rows <= 8 * m + 1024 ? new Int32Array(cols * rows).fill(-1) : null;
   const cellOf = new Map<number, number>();
+  let cells = 0;
   let pairCell = new Int32Array(4 * m);
   let pairMember = new Int32Array(4 * m);
   let pairs = 0;
   for (let i = 0; i < m; i++) {
-    const x0 = Math.floor((seg.minX[i] - minX - eps) / h);
-    const x1 = Math.floor((seg.maxX[i] - minX + eps) / h);
-    const y0 = Math.floor((seg.minY[i] - minY - eps) / h);
-    const y1 = Math.floor((seg.maxY[i] - minY + eps) / h);
+    const x0 = Math.max(0, Math.floor((seg.minX[i] - minX - eps) / h));
+    const x1 = Math.min(cols - 1, Math.floor((seg.maxX[i] - minX + eps) / h));
+    const y0 = Math.max(0, Math.floor((seg.minY[i] - minY - eps) / h));
+    const y1 = Math.min(rows - 1, Math.floor((seg.maxY[i] - minY + eps) / h));
     for (let cx = x0; cx <= x1; cx++) {
       for (let cy = y0; cy <= y1; cy++) {
         const key = cx * rows + cy;
-        let cell = cellOf.get(key);
-        if (cell === undefined) { cell = cellOf.size; cellOf.set(key, cell); }
+        let cell = table ? table[key] : (cellOf.get(key) ?? -1);
+        if (cell < 0) {
+          cell = cells++;
+          if (table) table[key] = cell;
+          else cellOf.set(key, cell);
+        }
         if (pairs === pairCell.length) { pairCell = grow(pairCell); pairMember = grow(pairMember); }
         pairCell[pairs] = cell;
         pairMember[pairs++] = i;
@@ -79,7 +91,6 @@ function firstOverlap(model: TrussModel, index: TrussIndex, lengths: Float64Arra
     }
   }
   // Members of each cell, in member order (a counting sort keeps the order).
-  const cells = cellOf.size;
   const starts = new Int32Array(cells + 1);
   for (let k = 0; k < pairs; k++) starts[pairCell[k] + 1]++;
   for (let c = 0; c < cells; c++) starts[c + 1] += starts[c];

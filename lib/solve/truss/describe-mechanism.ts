@@ -41,10 +41,12 @@ export function describeMechanism(model: TrussModel, mode: MechanismMode | null)
   }
   const px = cx - b / theta;
   const py = cy + a / theta;
-  return `the supports let the whole truss turn about the point (${round(px)}, ${round(py)}): the lines of all reactions pass through it`;
+  const size = Math.max(extent, Math.hypot(cx, cy));
+  return `the supports let the whole truss turn about the point (${round(px, size)}, ${round(py, size)}): the lines of all reactions pass through it`;
 }
 
-function round(v: number): string {
-  const r = Number(v.toPrecision(4));
-  return String(Object.is(r, -0) ? 0 : r);
+/** Four significant figures, with round-off against the model's size shown as 0. */
+function round(v: number, size: number): string {
+  if (Math.abs(v) <= 1e-9 * size) return "0";
+  return String(Number(v.toPrecision(4)));
 }

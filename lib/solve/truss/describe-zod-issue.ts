@@ -28,8 +28,10 @@ export function describeZodIssue(issue: z.core.$ZodIssue): { path: string; messa
     case "too_small":
       if (issue.origin === "array") {
         const least = Number(issue.minimum);
-        const what = LIST_NOUNS[path] ?? ["entry", "entries"];
-        return { path, message: `A truss needs at least ${least} ${least === 1 ? what[0] : what[1]}; ${path} has ${got.replace("a list of ", "")}.` };
+        const count = got.replace("a list of ", "");
+        const what = LIST_NOUNS[path];
+        if (!what) return { path, message: `${path} needs at least ${least} entries, but it has ${count}.` };
+        return { path, message: `A truss needs at least ${least} ${least === 1 ? what[0] : what[1]}; ${path} has ${count}.` };
       }
       return { path, message: `${path} is too short: ${issue.message}.` };
     case "too_big":

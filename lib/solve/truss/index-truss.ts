@@ -4,7 +4,7 @@ import type { TrussModel } from "../types";
 export type TrussIndex = {
   /** Joint id → position in `model.joints`. */
   jointIndex: Map<string, number>;
-  /** Member i runs from joint `start[i]` to joint `end[i]` (positions in `model.joints`). */
+  /** Member i runs from joint `start[i]` to joint `end[i]` (positions in `model.joints`, −1 for an unknown id). */
   start: Int32Array;
   end: Int32Array;
 };

@@ -1,14 +1,15 @@
 import { bandNullVector } from "../sparse/band-null-vector";
 import type { BandLdlt } from "../sparse/factor-band-ldlt";
 import type { DofNumbering } from "./number-dofs";
+import { toGlobal, type GlobalDisplacements } from "./to-global";
 
 /** Modes worked out in full; past this, only the joint at each further zero pivot is named (it always moves). */
 const MAX_MODES = 64;
 /** A joint moves in a mode when its displacement exceeds this share of the mode's largest (round-off sits near 1e-12). */
 const MOVING_SHARE = 1e-6;
 
-/** One mechanism: the global displacement of every joint, and whether it is a rigid-body motion of the whole truss. */
-export type MechanismMode = { ux: Float64Array; uy: Float64Array };
+/** One mechanism: how far each joint moves in it, in global x–y components (any scale). */
+export type MechanismMode = GlobalDisplacements;
 
 /**
  * The joints that can move, from the singular directions the zero pivots
@@ -29,17 +30,4 @@ export function mechanismJoints(factor: BandLdlt, dofs: DofNumbering, jointCount
   const moving: number[] = [];
   moves.forEach((flag, i) => flag && moving.push(i));
   return { moving, first };
-}
-
-/** Global x–y displacements from the free components, each joint in its own basis. */
-export function toGlobal(x: ArrayLike<number>, dofs: DofNumbering, jointCount: number): MechanismMode {
-  const ux = new Float64Array(jointCount);
-  const uy = new Float64Array(jointCount);
-  for (let i = 0; i < jointCount; i++) {
-    const a = dofs.dof1[i] >= 0 ? x[dofs.dof1[i]] : 0;
-    const b = dofs.dof2[i] >= 0 ? x[dofs.dof2[i]] : 0;
-    ux[i] = a * dofs.e1x[i] + b * dofs.e2x[i];
-    uy[i] = a * dofs.e1y[i] + b * dofs.e2y[i];
-  }
-  return { ux, uy };
 }

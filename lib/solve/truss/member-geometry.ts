@@ -3,7 +3,9 @@ import type { TrussIndex } from "./index-truss";
 
 /** Length and direction cosines (start → end) of every member, in model order. */
 export type MemberGeometry = {
+  /** Length L of each member. */
   length: Float64Array;
+  /** cos θ and sin θ of each member's direction from start to end. */
   cx: Float64Array;
   cy: Float64Array;
 };

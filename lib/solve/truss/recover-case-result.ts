@@ -6,17 +6,19 @@ import type { MemberCoefficients } from "./assemble-stiffness";
 import { cleanRoundOff } from "./clean-round-off";
 import type { TrussIndex } from "./index-truss";
 import type { JointLoadTotals } from "./joint-loads";
-import { toGlobal } from "./mechanism-joints";
+import { toGlobal } from "./to-global";
 import type { MemberGeometry } from "./member-geometry";
 import type { DofNumbering } from "./number-dofs";
 
 /** Everything one back-substitution needs; the factor is shared by all load cases. */
 export type CaseSolveContext = {
+  /** The validated model. */
   model: TrussModel;
   index: TrussIndex;
   geometry: MemberGeometry;
   dofs: DofNumbering;
   coefficients: MemberCoefficients;
+  /** LDLᵀ factor of the stiffness built from `axial`. */
   factor: BandLdlt;
   /** Axial stiffness k of each member used in the factor. */
   axial: Float64Array;
@@ -41,10 +43,14 @@ export function recoverCaseResult(ctx: CaseSolveContext, loads: JointLoadTotals)
   const x = solveBandLdlt(ctx.factor, rhs);
   const { eq, v } = ctx.coefficients;
   const force = new Float64Array(ctx.axial.length);
-  const rx = Float64Array.from(loads.fx, (f) => -f);
-  const ry = Float64Array.from(loads.fy, (f) => -f);
+  const rx = new Float64Array(jCount);
+  const ry = new Float64Array(jCount);
   let scale = 0;
-  for (let k = 0; k < jCount; k++) scale = Math.max(scale, Math.abs(loads.fx[k]), Math.abs(loads.fy[k]));
+  for (let k = 0; k < jCount; k++) {
+    rx[k] = -loads.fx[k];
+    ry[k] = -loads.fy[k];
+    scale = Math.max(scale, Math.abs(loads.fx[k]), Math.abs(loads.fy[k]));
+  }
   for (let e = 0; e < force.length; e++) {
     let elongation = 0;
     for (let p = 4 * e; p < 4 * e + 4; p++) if (eq[p] >= 0) elongation += v[p] * x[eq[p]];

@@ -1,6 +1,6 @@
 import { SolveError } from "../errors";
 import { factorBandLdlt } from "../sparse/factor-band-ldlt";
-import type { CaseResult, TrussModel, TrussSolution } from "../types";
+import type { CaseResult, Step, TrussModel, TrussSolution } from "../types";
 import { analyseStability } from "./analyse-stability";
 import { assembleStiffness } from "./assemble-stiffness";
 import { jointLoads } from "./joint-loads";
@@ -50,8 +50,11 @@ export function solveTruss(model: TrussModel): TrussSolution {
   }
   const ctx: CaseSolveContext = { model: clean, index, geometry, dofs, coefficients, factor, axial, withDisplacements };
   const cases: Record<string, CaseResult> = {};
-  for (const loadCase of clean.loadCases) cases[loadCase.id] = recoverCaseResult(ctx, jointLoads(loadCase, index, clean.joints.length));
-  const first = clean.loadCases[0];
-  const steps = first ? reactionSteps(clean, first, cases[first.id].reactions) : [];
+  let steps: Step[] = [];
+  clean.loadCases.forEach((loadCase, c) => {
+    const loads = jointLoads(loadCase, index, clean.joints.length);
+    cases[loadCase.id] = recoverCaseResult(ctx, loads);
+    if (c === 0) steps = reactionSteps(clean, loads, cases[loadCase.id].reactions);
+  });
   return { counts: { m: counts.m, r: counts.r, j: counts.j }, classification: counts.classification, cases, steps };
 }

@@ -1,0 +1,92 @@
+"use client";
+
+import type { JSONContent } from "@tiptap/core";
+import { EditorContent, useEditor } from "@tiptap/react";
+import { useState } from "react";
+import { SafetyNotice } from "@/components/shell/safety-notice";
+import { CalcProvider } from "./calc-context";
+import { ConflictBanner } from "./conflict-banner";
+import { DocumentOutline } from "./document-outline";
+import { EditorToolbar } from "./editor-toolbar";
+import { editorExtensions } from "./editor-extensions";
+import { SaveIndicator } from "./save-indicator";
+import { useAutosave } from "./use-autosave";
+import { useCalcEvaluation } from "./use-calc-evaluation";
+
+export type PackageEditorProps = {
+  packageId: string;
+  initialDocument: JSONContent;
+  initialVersion: number;
+  canEdit: boolean;
+  unitSystem: "SI" | "US";
+};
+
+/** The package: narrative and live calcs in one document, recomputed in the browser, autosaved with its version. */
+export function PackageEditor({ packageId, initialDocument, initialVersion, canEdit, unitSystem }: PackageEditorProps) {
+  const { evaluation, recompute } = useCalcEvaluation(initialDocument);
+  const [doc, setDoc] = useState<JSONContent>(initialDocument);
+  const autosave = useAutosave({ packageId, initialVersion, canEdit });
+
+  const editor = useEditor({
+    immediatelyRender: false,
+    editable: canEdit,
+    extensions: editorExtensions(),
+    content: initialDocument,
+    editorProps: { attributes: { class: "prose prose-stone max-w-none font-serif pp-document focus:outline-none", "aria-label": "Package text" } },
+    onUpdate: ({ editor: e }) => {
+      const json = e.getJSON();
+      setDoc(json);
+      recompute(json);
+      autosave.edit(json);
+    },
+  });
+
+  const labels = Object.values(evaluation.results).map((r) => r.label);
+  const calcIndexStatus = (index: number) => {
+    const id = doc.content?.[index]?.attrs?.id as string | undefined;
+    return id ? evaluation.results[id]?.status : undefined;
+  };
+
+  return (
+    <div className="grid grid-cols-[14rem_1fr] gap-6">
+      <aside className="sticky top-4 self-start">
+        <DocumentOutline
+          doc={doc}
+          statusOf={calcIndexStatus}
+          onJump={(index) => {
+            const dom = editor?.view.dom.children[index] as HTMLElement | undefined;
+            dom?.scrollIntoView({ behavior: "smooth", block: "start" });
+          }}
+        />
+      </aside>
+      <div className="min-w-0 space-y-3">
+        <div className="flex items-center gap-3">
+          <SafetyNotice className="flex-1 border-l-2 border-caution bg-caution-light px-3 py-2 text-caution" />
+          {canEdit ? <SaveIndicator status={autosave.status} lastSavedAt={autosave.lastSavedAt} error={autosave.error} /> : <span className="pp-tag" data-testid="read-only">Read-only for your role</span>}
+        </div>
+        {autosave.conflict && editor && (
+          <ConflictBanner
+            conflict={autosave.conflict}
+            onReload={() => {
+              const theirs = autosave.reloadTheirs();
+              if (theirs) editor.commands.setContent(theirs as JSONContent, { emitUpdate: false });
+            }}
+            onKeepMine={() => autosave.keepMine()}
+            onMerge={() => {
+              const merged = autosave.merge();
+              if (merged) editor.commands.setContent(merged as JSONContent);
+            }}
+          />
+        )}
+        <div className="pp-panel">
+          {editor && canEdit && <EditorToolbar editor={editor} />}
+          <CalcProvider value={{ evaluation, editable: canEdit, unitSystem, labels }}>
+            <div className="px-8 py-6">
+              <EditorContent editor={editor} />
+            </div>
+          </CalcProvider>
+        </div>
+      </div>
+    </div>
+  );
+}
