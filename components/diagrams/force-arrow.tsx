@@ -11,7 +11,7 @@ export function ForceArrow({ spec, kind }: ForceArrowProps) {
   const color = kind === "load" ? PALETTE.ink : PALETTE.verdigris;
   const { path, label } = spec;
   return (
-    <g data-arrow={kind} data-joint={spec.joint} opacity={spec.faded ? FADED_OPACITY : undefined}>
+    <g data-arrow={kind} data-joint={spec.joint} opacity={spec.faded ? FADED_OPACITY : undefined} pointerEvents="none">
       <path d={path.shaft} stroke={color} strokeWidth={1.5} fill="none" />
       <path d={path.head} fill={kind === "load" ? color : PALETTE.paperRaised} stroke={color} strokeWidth={kind === "load" ? 0 : 1.25} strokeLinejoin="round" />
       <text x={label.x} y={label.y} textAnchor={label.anchor} dominantBaseline="middle" fontSize={10.5} fill={color} className="pp-num" style={{ fontFamily: "var(--font-num), ui-monospace, monospace" }}>

@@ -12,7 +12,7 @@ export function JointMarker({ spec, background }: JointMarkerProps) {
   const { at, label } = spec;
   const labelColor = spec.invalid ? PALETTE.caution : spec.highlighted ? PALETTE.verdigris : PALETTE.ink;
   return (
-    <g data-joint={spec.id} opacity={spec.faded ? FADED_OPACITY : undefined}>
+    <g data-joint={spec.id} opacity={spec.faded ? FADED_OPACITY : undefined} pointerEvents="none">
       {spec.highlighted && <circle cx={at.x} cy={at.y} r={8} fill="none" stroke={PALETTE.verdigris} strokeWidth={2} />}
       {spec.invalid && (
         <rect x={at.x - 7} y={at.y - 7} width={14} height={14} fill="none" stroke={PALETTE.caution} strokeWidth={1.5} strokeDasharray="3 2" data-invalid-marker="" />

@@ -16,6 +16,8 @@ export function MemberLabel({ spec, background }: MemberLabelProps) {
   return (
     <text
       data-member-label={spec.id}
+      // Labels lie over members; clicks must reach the member underneath.
+      pointerEvents="none"
       x={label.at.x}
       y={label.at.y}
       textAnchor={label.at.anchor}

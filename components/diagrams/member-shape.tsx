@@ -26,12 +26,13 @@ export function MemberShape({ spec, background, onActivate }: MemberShapeProps) 
     e.preventDefault();
     onActivate(id);
   };
+  // No outline: a box round the member's bounding box would frame its neighbours too; focus tints the hit line instead.
   const interactive = onActivate
     ? { role: "button", tabIndex: 0, "aria-label": spec.name, "aria-pressed": spec.highlighted, onClick: () => onActivate(id), onKeyDown }
     : {};
 
   return (
-    <g data-member={id} data-sense={style.sense} className={onActivate ? "group cursor-pointer focus-visible:outline-none" : undefined} {...interactive}>
+    <g data-member={id} data-sense={style.sense} className={onActivate ? "group cursor-pointer outline-none" : undefined} {...interactive}>
       <title>{spec.name}</title>
       {spec.highlighted && (
         <line x1={a.x} y1={a.y} x2={b.x} y2={b.y} stroke={PALETTE.verdigris} strokeOpacity={0.3} strokeWidth={style.width + 9} strokeLinecap="round" />

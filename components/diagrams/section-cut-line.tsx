@@ -8,6 +8,6 @@ export type SectionCutLineProps = { points: Point[] };
 export function SectionCutLine({ points }: SectionCutLineProps) {
   if (points.length < 2) return null;
   return (
-    <path data-section-line="" d={wavePath(points)} fill="none" stroke={PALETTE.ink} strokeWidth={1.5} strokeDasharray="9 3 2 3" strokeLinecap="round" />
+    <path data-section-line="" pointerEvents="none" d={wavePath(points)} fill="none" stroke={PALETTE.ink} strokeWidth={1.5} strokeDasharray="9 3 2 3" strokeLinecap="round" />
   );
 }

@@ -1,4 +1,4 @@
-import { useId } from "react";
+import { memo, useId } from "react";
 import type { CaseResult, JointLoad, TrussModel } from "@/lib/solve";
 import { buildScene } from "./build-scene";
 import { caseLoads } from "./case-loads";
@@ -49,8 +49,12 @@ export type TrussDiagramProps = {
   className?: string;
 };
 
-/** A truss drawn to scale: members, joints, supports, loads, and after solving, forces by sign and magnitude. */
-export function TrussDiagram(props: TrussDiagramProps) {
+/**
+ * A truss drawn to scale: members, joints, supports, loads, and after solving,
+ * forces by sign and magnitude. Memoised: every calc re-renders as the author
+ * types, and a diagram whose model and result objects are unchanged is skipped.
+ */
+export const TrussDiagram = memo(function TrussDiagram(props: TrussDiagramProps) {
   const { model, result, onMemberClick, background = PALETTE.paperRaised } = props;
   const titleId = useId();
   const descId = useId();
@@ -132,4 +136,4 @@ export function TrussDiagram(props: TrussDiagramProps) {
       )}
     </figure>
   );
-}
+});

@@ -23,7 +23,7 @@ export function CalcFrame({ kind, label, result, editable, selected, onRename, s
   const status = result?.status ?? "ok";
   return (
     <NodeViewWrapper
-      className={`pp-calc my-4 rounded-sm border bg-paper-raised ${selected ? "border-verdigris" : "border-rule-strong"}`}
+      className={`pp-calc not-prose my-4 rounded-sm border bg-paper-raised ${selected ? "border-verdigris" : "border-rule-strong"}`}
       data-calc-label={label}
       data-calc-status={status}
       contentEditable={false}

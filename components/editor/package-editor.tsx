@@ -2,7 +2,7 @@
 
 import type { JSONContent } from "@tiptap/core";
 import { EditorContent, useEditor } from "@tiptap/react";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { SafetyNotice } from "@/components/shell/safety-notice";
 import { CalcProvider } from "./calc-context";
 import { ConflictBanner } from "./conflict-banner";
@@ -25,7 +25,7 @@ export type PackageEditorProps = {
 export function PackageEditor({ packageId, initialDocument, initialVersion, canEdit, unitSystem }: PackageEditorProps) {
   const { evaluation, recompute } = useCalcEvaluation(initialDocument);
   const [doc, setDoc] = useState<JSONContent>(initialDocument);
-  const autosave = useAutosave({ packageId, initialVersion, canEdit });
+  const autosave = useAutosave({ packageId, initialVersion, canEdit, initialDocument });
 
   const editor = useEditor({
     immediatelyRender: false,
@@ -40,6 +40,16 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
       autosave.edit(json);
     },
   });
+
+  // A draft kept on this device (offline, crash) comes back on screen before anything else is typed over it.
+  useEffect(() => {
+    if (editor && autosave.restored) {
+      editor.commands.setContent(autosave.restored.document as JSONContent, { emitUpdate: false });
+      const json = editor.getJSON();
+      setDoc(json);
+      recompute(json);
+    }
+  }, [editor, autosave.restored, recompute]);
 
   const labels = Object.values(evaluation.results).map((r) => r.label);
   const calcIndexStatus = (index: number) => {
@@ -62,9 +72,9 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
       <div className="min-w-0 space-y-3">
         <div className="flex items-center gap-3">
           <SafetyNotice className="flex-1 border-l-2 border-caution bg-caution-light px-3 py-2 text-caution" />
-          {canEdit ? <SaveIndicator status={autosave.status} lastSavedAt={autosave.lastSavedAt} error={autosave.error} /> : <span className="pp-tag" data-testid="read-only">Read-only for your role</span>}
+          {canEdit ? <SaveIndicator status={autosave.status} lastSavedAt={autosave.lastSavedAt} error={autosave.error} keptOnDevice={autosave.keptOnDevice} lastOverwrite={autosave.lastOverwrite} /> : <span className="pp-tag" data-testid="read-only">Read-only for your role</span>}
         </div>
-        {autosave.conflict && editor && (
+        {(autosave.conflict || autosave.rejected) && editor && (
           <ConflictBanner
             conflict={autosave.conflict}
             onReload={() => {
@@ -72,6 +82,8 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
               if (theirs) editor.commands.setContent(theirs as JSONContent, { emitUpdate: false });
             }}
             onKeepMine={() => autosave.keepMine()}
+            rejected={autosave.rejected}
+            onDismissRejected={autosave.dismissRejected}
             onMerge={() => {
               const merged = autosave.merge();
               if (merged) editor.commands.setContent(merged as JSONContent);

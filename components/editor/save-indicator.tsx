@@ -1,6 +1,6 @@
 "use client";
 
-import type { AutosaveError, AutosaveStatus } from "@/lib/client/autosave/autosave-state";
+import type { AutosaveError, AutosaveStatus, OverwriteRecord } from "@/lib/client/autosave/autosave-state";
 import { formatSaveTime } from "@/lib/client/autosave/format-save-time";
 
 export type SaveIndicatorProps = {
@@ -9,6 +9,8 @@ export type SaveIndicatorProps = {
   error: AutosaveError | null;
   /** False when the browser would not keep a copy of unsaved work; said aloud while work is unsaved. */
   keptOnDevice?: boolean;
+  /** A "keep mine" save; named while it is the latest save, so the author sees that it replaced someone's version. */
+  lastOverwrite?: OverwriteRecord | null;
 };
 
 const tone: Record<AutosaveStatus, string> = {
@@ -56,8 +58,9 @@ function words(status: AutosaveStatus, error: AutosaveError | null): string {
 }
 
 /** Saved / saving / not saved beside the document, in words and a shape, announced politely to screen readers. */
-export function SaveIndicator({ status, lastSavedAt, error, keptOnDevice = true }: SaveIndicatorProps) {
+export function SaveIndicator({ status, lastSavedAt, error, keptOnDevice = true, lastOverwrite = null }: SaveIndicatorProps) {
   const time = status === "saved" && lastSavedAt ? formatSaveTime(lastSavedAt) : null;
+  const overwrote = status === "saved" && lastOverwrite !== null && lastOverwrite.savedAt === lastSavedAt;
   const unsaved = status === "pending" || status === "saving" || status === "not-saved" || status === "conflict";
   return (
     <div role="status" aria-live="polite" data-testid="save-indicator" data-status={status} className={`inline-flex items-center gap-1.5 text-xs ${tone[status]}`}>
@@ -69,6 +72,7 @@ export function SaveIndicator({ status, lastSavedAt, error, keptOnDevice = true 
             {" "}at <time dateTime={lastSavedAt}>{time}</time>
           </>
         )}
+        {overwrote && ` · replaced ${lastOverwrite.replacedSavedBy}'s version ${lastOverwrite.replacedVersion}`}
         {unsaved && !keptOnDevice && <span className="font-medium"> · not kept on this device</span>}
       </span>
     </div>

@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useState } from "react";
+import { memo, useId, useState } from "react";
 import type { Step } from "@/lib/solve";
 import { Tex } from "./tex";
 import { visibleSteps, workingToggleLabel } from "./visible-steps";
@@ -20,7 +20,7 @@ export type StepListProps = {
  * A calc's working, one typeset line per step with the same line in words under
  * it, numbered so a checker can cite "step 4". It collapses to the result.
  */
-export function StepList({ steps, collapsed, onToggle, defaultCollapsed = false, className }: StepListProps) {
+export const StepList = memo(function StepList({ steps, collapsed, onToggle, defaultCollapsed = false, className }: StepListProps) {
   const [own, setOwn] = useState(defaultCollapsed);
   const listId = useId();
   const isCollapsed = collapsed ?? own;
@@ -52,4 +52,4 @@ export function StepList({ steps, collapsed, onToggle, defaultCollapsed = false,
       </ol>
     </div>
   );
-}
+});

@@ -3,18 +3,20 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { toast } from "sonner";
-import { SafetyNotice } from "@/components/shell/safety-notice";
+import type { JSONContent } from "@tiptap/core";
+import { PackageEditor } from "@/components/editor/package-editor";
 import { fetchJson } from "@/lib/client/fetch-json";
 import { StatusTag } from "./status-tag";
 
 export type PackageViewProps = {
   projectId: string;
-  pkg: { id: string; title: string; status: string; version: number; updatedAt: string };
+  pkg: { id: string; title: string; status: string; version: number; updatedAt: string; document: unknown };
+  unitSystem: "SI" | "US";
   canEdit: boolean;
   canDelete: boolean;
 };
 
-export function PackageView({ projectId, pkg, canEdit, canDelete }: PackageViewProps) {
+export function PackageView({ projectId, pkg, canEdit, canDelete, unitSystem }: PackageViewProps) {
   const router = useRouter();
   const [title, setTitle] = useState(pkg.title);
   const [renaming, setRenaming] = useState(false);
@@ -64,11 +66,7 @@ export function PackageView({ projectId, pkg, canEdit, canDelete }: PackageViewP
           )}
         </div>
       </header>
-      <SafetyNotice className="border-l-2 border-caution bg-caution-light px-3 py-2 text-caution" />
-      <div className="pp-panel min-h-64 p-8 font-serif text-ink-soft" data-testid="editor-placeholder">
-        The package editor (narrative with live calcs) arrives here.
-        {canEdit ? " You will be able to edit this package." : " Your role reads this package."}
-      </div>
+      <PackageEditor packageId={pkg.id} initialDocument={pkg.document as JSONContent} initialVersion={pkg.version} canEdit={canEdit && pkg.status !== "issued"} unitSystem={unitSystem} />
     </article>
   );
 }

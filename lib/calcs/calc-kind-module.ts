@@ -45,7 +45,11 @@ export function defineCalcKind<I>(kind: CalcKindModule<I>): CalcKindEntry {
     defaults: kind.defaults,
     prepare(raw) {
       const parsed = kind.inputs.safeParse(raw);
-      if (!parsed.success) return { ok: false, fieldErrors: inputFieldErrors(parsed.error) };
+      if (!parsed.success) {
+        // Parse again keeping the offending values, so a missing field reads differently from a wrong one; only on failure.
+        const again = kind.inputs.safeParse(raw, { reportInput: true });
+        return { ok: false, fieldErrors: inputFieldErrors(again.error ?? parsed.error) };
+      }
       const inputs = parsed.data;
       return {
         ok: true,

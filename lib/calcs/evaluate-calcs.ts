@@ -116,7 +116,8 @@ function finalResult(
   previous: PackageEvaluation | undefined,
 ): CalcResult {
   const kept = previous?.results[calc.id];
-  if (!recomputed.has(calc.id) && kept) return { ...kept, label: calc.label };
+  // The same object when nothing changed, so a view memoized on its result does not re-render.
+  if (!recomputed.has(calc.id) && kept) return kept.label === calc.label ? kept : { ...kept, label: calc.label };
   const own = details.get(calc.id);
   if (own) return resultOf(calc, own);
   const outcome = recompute.results[calc.id];

@@ -22,9 +22,12 @@ export function measureDocument(value: unknown): { ok: true; bytes: number } | D
     else if (typeof v === "number") {
       if (!Number.isFinite(v)) return { ok: false, message: `${path || "The document"} holds ${String(v)}, which JSON cannot represent.`, path: path || undefined };
       bytes += String(v).length;
-    } else if (typeof v === "string") bytes += jsonStringBytes(v);
-    else if (Array.isArray(v)) {
+    } else if (typeof v === "string") {
+      // A string takes at least one byte per UTF-16 unit, so a huge one is refused without being read through.
+      bytes += v.length > MAX_DOCUMENT_BYTES ? v.length + 2 : jsonStringBytes(v);
+    } else if (Array.isArray(v)) {
       bytes += 2 + Math.max(0, v.length - 1);
+      if (bytes > MAX_DOCUMENT_BYTES) return { ok: false, message: tooLarge(bytes, true) };
       const inContent = path.endsWith("content");
       if (inContent && nodeDepth + 1 > MAX_NODE_DEPTH) return { ok: false, message: `The document nests nodes more than ${MAX_NODE_DEPTH} levels deep at ${path}.`, path };
       for (let i = v.length - 1; i >= 0; i--) stack.push({ value: v[i], path: `${path}[${i}]`, jsonDepth: jsonDepth + 1, nodeDepth: inContent ? nodeDepth + 1 : nodeDepth });

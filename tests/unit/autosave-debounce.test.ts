@@ -26,6 +26,16 @@ describe("autosave debounce", () => {
     expect(controller.getState()).toMatchObject({ status: "saved", version: 2, lastSavedAt: server.savedAt, error: null });
   });
 
+  it("does not let a repeat of the same document push back a save that is due", async () => {
+    const { controller, server } = openEditor();
+    controller.edit(doc("Span 14 m."));
+    await vi.advanceTimersByTimeAsync(700);
+    controller.edit(doc("Span 14 m."));
+    await vi.advanceTimersByTimeAsync(100);
+    await settle();
+    expect(server.requests).toHaveLength(1);
+  });
+
   it("honours a shorter pause when one is configured", async () => {
     const { controller, server } = openEditor(undefined, undefined, { debounceMs: 200 });
     controller.edit(doc("Span 14 m."));

@@ -33,6 +33,13 @@ describe("SaveIndicator", () => {
     const html = renderToStaticMarkup(createElement(SaveIndicator, { status: "saved", lastSavedAt: "2026-12-02T10:05:00.000Z", error: null }));
     expect(html).toContain('<time dateTime="2026-12-02T10:05:00.000Z">');
   });
+
+  it("says so when the latest save replaced someone else's version", () => {
+    const lastOverwrite = { replacedVersion: 5, replacedSavedBy: "Ben Okafor", version: 6, savedAt: "2026-12-02T10:06:00.000Z" };
+    const props = { status: "saved", error: null, lastOverwrite } as const;
+    expect(renderToStaticMarkup(createElement(SaveIndicator, { ...props, lastSavedAt: "2026-12-02T10:06:00.000Z" }))).toContain("replaced Ben Okafor&#x27;s version 5");
+    expect(renderToStaticMarkup(createElement(SaveIndicator, { ...props, lastSavedAt: "2026-12-02T10:09:00.000Z" }))).not.toContain("replaced");
+  });
 });
 
 describe("ConflictBanner", () => {

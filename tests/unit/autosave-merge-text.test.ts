@@ -79,6 +79,16 @@ describe("mergeText", () => {
     expect(mergeText({ base: calcBase, mine, theirs }).document).toEqual(doc(para("Intro — revised", "a"), truss("t1", 14)));
   });
 
+  it("gives the author's copy of a calc changed on both sides its own id and label, so the document still validates", () => {
+    const calcBase = doc(truss("calc-0001", 12));
+    const { document, conflicts } = mergeText({ base: calcBase, mine: doc(truss("calc-0001", 14)), theirs: doc(truss("calc-0001", 16)) });
+    expect(conflicts).toBe(1);
+    expect(document.content?.slice(1)).toEqual([
+      truss("calc-0001", 16),
+      { type: "truss", attrs: { id: "calc-0001-mine", label: "T1_mine", inputs: { span: 14 } } },
+    ]);
+  });
+
   it("without a known base keeps what either side has and marks blocks that differ", () => {
     const mine = doc(para("Intro", "a"), para("Loads: 5", "b"), para("Mine only", "m"));
     const theirs = doc(para("Intro", "a"), para("Loads: 4", "b"));

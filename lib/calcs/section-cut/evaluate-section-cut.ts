@@ -6,8 +6,8 @@ import { computedEvaluation, failedEvaluation, type KindEvaluation } from "../ki
 import { quantityValue } from "../quantity-value";
 import { readTrussValue } from "../read-truss-value";
 import { forceSense } from "../truss/force-sense";
-import { chooseCut } from "./choose-cut";
 import { resolveLoadCase } from "../resolve-load-case";
+import { chooseCut } from "./choose-cut";
 import type { SectionCutInputs } from "./section-cut-inputs";
 import type { SectionCutView } from "./section-cut-view";
 

@@ -1,4 +1,4 @@
-import { isSolveError, lineLoadToPanelLoads, SolveError, type TrussModel } from "../../solve";
+import { isSolveError, lineLoadToPanelLoads, SolveError, validateTruss, type TrussModel } from "../../solve";
 import type { TrussInputs } from "./truss-inputs";
 import type { TrussUnits } from "./truss-units";
 
@@ -6,8 +6,8 @@ import type { TrussUnits } from "./truss-units";
  * The solver's model of a Truss calc, in consistent units: sections converted
  * (mm² → m², GPa → kN/m²…), explicit joint loads first, then each line load
  * lumped at its panel points and appended to its case. Throws SolveError
- * INVALID with the input path (`lineLoads[1].chord[3]`); the rest of the
- * model is checked by the solver, whose paths are the inputs' own.
+ * INVALID with the input path: the model's own fields first (the solver's
+ * paths are the inputs' own, `members[3].end`), then `lineLoads[1].chord[3]`.
  */
 export function buildTrussModel(inputs: TrussInputs, units: TrussUnits): TrussModel {
   const model: TrussModel = {
@@ -23,7 +23,10 @@ export function buildTrussModel(inputs: TrussInputs, units: TrussUnits): TrussMo
     supports: inputs.supports.map((s) => ({ joint: s.joint, type: s.type, ...(s.direction ? { direction: [s.direction[0], s.direction[1]] as [number, number] } : {}) })),
     loadCases: inputs.loadCases.map((c) => ({ id: c.id, loads: c.loads.map((l) => ({ ...l })) })),
   };
-  (inputs.lineLoads ?? []).forEach((line, k) => {
+  const lineLoads = inputs.lineLoads ?? [];
+  // The model's own problems come first: a member to a missing joint is the error to show, not the chord it breaks.
+  if (lineLoads.length > 0) validateTruss(model);
+  lineLoads.forEach((line, k) => {
     const target = model.loadCases.find((c) => c.id === line.case);
     if (!target) {
       const names = model.loadCases.map((c) => c.id).join(", ") || "none";

@@ -103,7 +103,7 @@ export class AutosaveController {
   restore(): RestoredDraft | null {
     if (this.restored !== undefined) return this.restored;
     const draft = this.drafts.read();
-    if (!draft || this.loop.holds(stableJson(draft.document))) {
+    if (!draft || this.loop.base.holds(stableJson(draft.document))) {
       if (draft) this.drafts.clear();
       this.restored = null;
       return null;
@@ -145,7 +145,7 @@ export class AutosaveController {
     const conflict = this.cell.get().conflict;
     if (!conflict) return null;
     const { theirs, mine } = conflict;
-    const result = mergeText({ base: this.loop.baseDocument, mine, theirs: theirs.document, theirsLabel: theirs.savedBy });
+    const result = mergeText({ base: this.loop.base.document, mine, theirs: theirs.document, theirsLabel: theirs.savedBy });
     this.loop.rebaseOnto(theirs);
     this.loop.resume(result.document, null);
     return result;

@@ -49,7 +49,7 @@ export class DraftStore {
     }
   }
 
-  /** Stores the draft; false when the storage refused it. `json` is `stableJson(document)`, already computed by the caller. */
+  /** Stores the draft; false when the storage refused it. `json` is the document already serialized by the caller (it runs per keystroke). */
   write(baseVersion: number, json: string, editedAt: Date): boolean {
     return this.set(this.key, `{"baseVersion":${baseVersion},"editedAt":${JSON.stringify(editedAt.toISOString())},"document":${json}}`);
   }

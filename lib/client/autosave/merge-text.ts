@@ -2,6 +2,7 @@ import { diff3Hunks } from "./diff3-hunks";
 import { lcsMatches } from "./lcs-matches";
 import { stableJson } from "./stable-json";
 import type { TipTapNode } from "./tiptap-node";
+import { uniqueBlockAttrs } from "./unique-block-attrs";
 
 export type MergeTextOptions = {
   /** The version both sides were edited from; null when it is not known (both are compared directly). */
@@ -56,26 +57,15 @@ function guessBase(mine: Block[], theirs: Block[]): Block[] {
 
 const sameContent = (x: Block[], y: Block[]) => x.length === y.length && x.every((block, i) => block.content === y[i].content);
 
-/** The author's copy of a block that also stays in their version gets a new id, so ids stay unique. */
-function withUniqueIds(nodes: TipTapNode[]): TipTapNode[] {
-  const seen = new Set<string>();
-  return nodes.map((node) => {
-    const id = node.attrs?.id;
-    if (typeof id !== "string" || id === "") return node;
-    let unique = id;
-    for (let n = 1; seen.has(unique); n++) unique = n === 1 ? `${id}-mine` : `${id}-mine-${n}`;
-    seen.add(unique);
-    return unique === id ? node : { ...node, attrs: { ...node.attrs, id: unique } };
-  });
-}
-
 /**
  * A block-level three-way merge of two TipTap documents. Top-level blocks are
  * matched by `attrs.id` when they have one, else by their content (in order).
  * A block changed, added or removed on one side only takes that side. Where
  * both sides changed the same place differently, both are kept — the server's
  * first, then the author's — under a paragraph starting "Conflict:", so
- * nothing either person wrote is lost and the author decides.
+ * nothing either person wrote is lost and the author decides. The author's
+ * copy of a calc gets its own id and label (`-mine`, `_mine`) so the merged
+ * document still validates.
  */
 export function mergeText({ base, mine, theirs, theirsLabel = "someone else" }: MergeTextOptions): MergeTextResult {
   const mineBlocks = (mine.content ?? []).map(toBlock);
@@ -105,5 +95,5 @@ export function mergeText({ base, mine, theirs, theirsLabel = "someone else" }: 
       keepBoth(hunk.theirs, hunk.mine);
     }
   }
-  return { document: { ...theirs, content: withUniqueIds(out) }, conflicts };
+  return { document: { ...theirs, content: uniqueBlockAttrs(out) }, conflicts };
 }

@@ -2,6 +2,7 @@ import type { AutosaveStateCell } from "./autosave-state-cell";
 import type { AutosaveState } from "./autosave-state";
 import type { AutosaveTimers } from "./autosave-timers";
 import { backoffDelay } from "./backoff-delay";
+import { DocumentContent } from "./document-content";
 import type { DraftStore } from "./draft-store";
 import { OneShotTimer } from "./one-shot-timer";
 import { offlineError, saveErrorFor } from "./save-error-for";
@@ -26,8 +27,7 @@ export type SaveLoopOptions = {
   baseDocument: TipTapNode | null;
 };
 
-type Content = { document: TipTapNode; json: string };
-type Sending = Content & { version: number; overwrite: ServerVersion | null };
+type Sending = { content: DocumentContent; version: number; overwrite: ServerVersion | null };
 
 /**
  * The sending half of autosave: debounce, one request in flight, queueing,
@@ -35,9 +35,10 @@ type Sending = Content & { version: number; overwrite: ServerVersion | null };
  * server acknowledged. It stops at a conflict; resolving one is the caller's.
  */
 export class SaveLoop {
-  private readonly base: ServerBase;
+  /** The version the text builds on; its document is the base of a merge. */
+  readonly base: ServerBase;
   /** The newest text not yet acknowledged; null when the server has what is on screen. */
-  private latest: Content | null = null;
+  private latest: DocumentContent | null = null;
   private sending: Promise<void> | null = null;
   private sendWhenDone = false;
   private overwrite: ServerVersion | null = null;
@@ -55,33 +56,18 @@ export class SaveLoop {
     this.retry = new OneShotTimer(o.timers);
   }
 
-  /** The document stored at the version the text builds on, when known: the base of a merge. */
-  get baseDocument(): TipTapNode | null {
-    return this.base.document;
-  }
-
-  holds(json: string): boolean {
-    return this.base.holds(json);
-  }
-
   hasUnsavedWork(): boolean {
     return this.latest !== null || this.sending !== null;
   }
 
+  /** Runs on every keystroke, so it costs one `JSON.stringify` and one storage write; comparing with the server waits for the pause. */
   edit(document: TipTapNode): void {
     if (!this.o.canEdit) return;
-    const json = stableJson(document);
-    if (this.latest ? json === this.latest.json : this.base.holds(json)) return;
+    const content = new DocumentContent(document);
+    if (content.json === this.latest?.json) return;
     const conflict = this.o.cell.get().conflict;
-    if (!this.sending && !conflict && this.base.holds(json)) {
-      // Typed back to what the server holds: nothing to send, nothing to keep.
-      this.latest = null;
-      this.debounce.cancel();
-      this.o.drafts.clear();
-      return this.publish({ status: this.forbidden ? "read-only" : "saved", error: null });
-    }
-    this.latest = { document, json };
-    const keptOnDevice = this.o.drafts.write(this.base.version, json, this.o.now());
+    this.latest = content;
+    const keptOnDevice = this.o.drafts.write(this.base.version, content.json, this.o.now());
     if (conflict) return this.publish({ conflict: { ...conflict, mine: document }, keptOnDevice });
     if (this.forbidden) return this.publish({ keptOnDevice });
     // While offline or backing off, the retry sends the latest text; typing does not hurry it.
@@ -112,7 +98,7 @@ export class SaveLoop {
   /** Picks up text from an earlier session, edited from `version` (whose document is unknown when the server moved on). */
   startFrom(document: TipTapNode, version: number): void {
     if (version !== this.base.version) this.base.set(version, null);
-    this.latest = { document, json: stableJson(document) };
+    this.latest = new DocumentContent(document);
     this.dispatch();
   }
 
@@ -124,10 +110,9 @@ export class SaveLoop {
 
   /** Saves `document` on top of the current version; `overwrite` marks a deliberate replacement of theirs. */
   resume(document: TipTapNode, overwrite: ServerVersion | null): void {
-    const json = stableJson(document);
-    this.latest = { document, json };
+    this.latest = new DocumentContent(document);
     this.overwrite = overwrite;
-    this.publish({ status: "pending", conflict: null, keptOnDevice: this.o.drafts.write(this.base.version, json, this.o.now()) });
+    this.publish({ status: "pending", conflict: null, keptOnDevice: this.o.drafts.write(this.base.version, this.latest.json, this.o.now()) });
     this.dispatch();
   }
 
@@ -149,17 +134,18 @@ export class SaveLoop {
     if (!this.online) return this.publish({ status: "not-saved", error: offlineError });
     this.debounce.cancel();
     this.retry.cancel();
-    if (this.base.holds(latest.json)) {
+    if (this.base.holds(latest.stable)) {
+      // Typed back to what the server holds: nothing to send, nothing to keep.
       this.latest = null;
-      this.o.drafts.clearIfContent(latest.json);
+      this.o.drafts.clearIfContent(latest.stable);
       return this.publish({ status: "saved", error: null });
     }
-    const sent: Sending = { ...latest, version: this.base.version, overwrite: this.overwrite };
+    const sent: Sending = { content: latest, version: this.base.version, overwrite: this.overwrite };
     this.sendWhenDone = false;
     this.publish({ status: "saving" });
     const { fetchImpl, packageId } = this.o;
     const overwritesVersion = sent.overwrite?.version;
-    this.sending = sendDocument({ fetchImpl, packageId, version: sent.version, document: sent.document, overwritesVersion }).then((outcome) => {
+    this.sending = sendDocument({ fetchImpl, packageId, version: sent.version, document: latest.document, overwritesVersion }).then((outcome) => {
       this.sending = null;
       this.settle(sent, outcome);
     });
@@ -181,14 +167,14 @@ export class SaveLoop {
   }
 
   private acknowledge(sent: Sending, version: number, savedAt: string): void {
-    this.base.set(version, sent.document, sent.json);
+    this.base.set(version, sent.content.document, sent.content.stable);
     this.attempt = 0;
     this.overwrite = null;
-    const previous = this.o.cell.get().lastOverwrite;
-    const lastOverwrite = sent.overwrite ? { replacedVersion: sent.overwrite.version, replacedSavedBy: sent.overwrite.savedBy, version, savedAt } : previous;
-    if (this.latest?.json === sent.json) {
+    const { overwrite: replaced } = sent;
+    const lastOverwrite = replaced ? { replacedVersion: replaced.version, replacedSavedBy: replaced.savedBy, version, savedAt } : this.o.cell.get().lastOverwrite;
+    if (this.latest === sent.content || this.latest?.json === sent.content.json) {
       this.latest = null;
-      this.o.drafts.clearIfContent(sent.json);
+      this.o.drafts.clearIfContent(sent.content.stable);
     } else if (this.latest) {
       // Newer typing is waiting: its draft now builds on the version just stored.
       this.o.drafts.write(version, this.latest.json, this.o.now());
@@ -198,12 +184,12 @@ export class SaveLoop {
   }
 
   private conflictWith(sent: Sending, theirs: ServerVersion): void {
-    const theirJson = stableJson(theirs.document);
-    const mine = this.latest ?? sent;
+    const stored = stableJson(theirs.document);
+    const mine = this.latest ?? sent.content;
     // The server already holds our text: an answer was lost, or a restored draft had been sent before.
-    if (theirJson === sent.json || theirJson === mine.json) {
-      const held = theirJson === sent.json ? sent : { ...mine, version: sent.version };
-      return this.acknowledge({ ...held, overwrite: null }, theirs.version, theirs.savedAt);
+    if (stored === sent.content.stable || stored === mine.stable) {
+      const held = stored === sent.content.stable ? sent.content : mine;
+      return this.acknowledge({ content: held, version: sent.version, overwrite: null }, theirs.version, theirs.savedAt);
     }
     this.debounce.cancel();
     this.sendWhenDone = false;
