@@ -17,7 +17,7 @@ export const calcNodes = { truss: trussNode, sectionCut: sectionCutNode, joint: 
 /** The document schema without React: the same list serves the editor, the server and the export. */
 export function baseExtensions() {
   return [
-    StarterKit.configure({ heading: { levels: [1, 2, 3, 4] }, codeBlock: false, strike: false, link: { openOnClick: false, protocols: ["mailto"] } }),
+    StarterKit.configure({ heading: { levels: [1, 2, 3, 4] }, codeBlock: false, strike: false, underline: false, link: { openOnClick: false, protocols: ["mailto"] } }),
     TableKit.configure({ table: { resizable: false } }),
     figureNode,
     standardReferenceNode,

@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { hashPassword } from "../../lib/auth/password";
+import { demoFootbridgeDocument } from "../../lib/document/demo-footbridge-document";
 import { DEMO_PASSWORD, demoFirm, demoPeople, demoProjects, otherFirm } from "../demo/people";
 
 /** Builds the invented demo scenario. Run once on an empty database (`npm run demo` checks first). */
@@ -21,8 +22,10 @@ export async function seed(knex: Knex): Promise<void> {
       for (const [key, role] of Object.entries(pr.members)) {
         await trx.insert({ projectId: project.id, userId: ids[key], role }).into("projectMemberships");
       }
-      for (const title of pr.packages) {
-        await trx.insert({ projectId: project.id, title, createdBy: ids.engineer }).into("packages");
+      for (const [i, title] of pr.packages.entries()) {
+        // The footbridge's first package is the worked demo: a real narrative with every calc type, linked.
+        const document = pr.key === "footbridge" && i === 0 ? JSON.stringify(demoFootbridgeDocument()) : undefined;
+        await trx.insert({ projectId: project.id, title, createdBy: ids.engineer, ...(document ? { document } : {}) }).into("packages");
       }
       await trx.insert({ firmId: firm.id, actorId: ids.admin, action: "project.create", entityType: "project", entityId: project.id, projectId: project.id, data: JSON.stringify({ seeded: true }) }).into("auditLog");
     }

@@ -99,6 +99,12 @@ const matrix: Row[] = [
     prepare: async (i) => ({ path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId })).id}` }),
     expect: { anon: 401, engineer: 204, checker: 403, pe: 204, admin: 403, other: 404 },
   },
+  {
+    method: "PUT",
+    route: "/api/v1/packages/[packageId]/document",
+    prepare: async (i) => ({ path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId })).id}/document`, body: { version: 1, document: { type: "doc", content: [] } } }),
+    expect: { anon: 401, engineer: 200, checker: 403, pe: 200, admin: 403, other: 404 },
+  },
   { method: "GET", route: "/api/v1/firm/members", prepare: async () => ({ path: "/api/v1/firm/members" }), expect: { ...all(200), anon: 401 } },
   {
     method: "PATCH",

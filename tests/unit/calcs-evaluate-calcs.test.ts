@@ -62,6 +62,14 @@ describe("evaluateCalcs", () => {
     expect(valueOf(resultOf(next, "F2"), "g")).toBe(10);
   });
 
+  it("re-reads inputs edited in place when the calc is said to have changed", () => {
+    const formula = seedCalc("formula", { source: "a = 1 m" }, "F1");
+    const first = evaluateCalcs({ calcs: [formula] });
+    (formula.inputs as { source: string }).source = "a = 5 m";
+    const next = evaluateCalcs({ calcs: [formula], previous: first, changed: [formula.id] });
+    expect(valueOf(resultOf(next, "F1"), "a")).toBe(5);
+  });
+
   it("shows a cycle F1 ↔ F2 on both calcs", () => {
     const f1 = seedCalc("formula", { source: "a = F2.b + 1 m" }, "F1");
     const f2 = seedCalc("formula", { source: "b = F1.a * 2" }, "F2");

@@ -76,6 +76,11 @@ describe("Member design calc", () => {
     expect(r.fieldErrors[0]).toEqual({ path: "members[0].fy", message: "is missing" });
   });
 
+  it("says what a source may be when it names neither a calc nor a case", () => {
+    const r = evaluateLast(demoCalc("T1"), design({ source: "C7" }));
+    expect(r.fieldErrors).toEqual([{ path: "source", message: '"C7" is neither a Combinations calc in this package nor a load case of T1 (it has G, Q).' }]);
+  });
+
   it("refuses a source that is a Truss calc rather than combinations", () => {
     const second = seedCalc("truss", demoCalc("T1").inputs, "T2");
     const r = evaluateLast(...withC1(), second, design({ source: "T2" }));

@@ -29,6 +29,7 @@ export function memberForceSource(
   }
   if (inputs.source === inputs.truss && truss.envelope) return { ok: true, source: { kind: "envelope", label: inputs.source, envelope: truss.envelope } };
   const found = resolveLoadCase(truss, inputs.source, inputs.truss, "source");
+  if (!found.ok && !inputs.source) return found;
   if (!found.ok) {
     const cases = truss.model.loadCases.map((c) => c.id).join(", ");
     return { ok: false, error: { path: "source", message: `"${inputs.source}" is neither a Combinations calc in this package nor a load case of ${inputs.truss} (it has ${cases || "no cases"}).` } };
