@@ -3,12 +3,16 @@ import { ReactNodeViewRenderer } from "@tiptap/react";
 import type { CalcKind } from "@/lib/calcs/calc-types";
 import { CalcCommands } from "./calc-commands";
 import { calcViews } from "./calc-views";
+import { FigureView } from "./nodes/figure/figure-view";
+import { figureNode } from "./nodes/figure/figure";
 import { baseExtensions, calcNodes } from "./schema-extensions";
 
 /** The browser's extension list: the shared schema plus React views, commands and the placeholder. */
-export function editorExtensions() {
+export function editorExtensions({ packageId }: { packageId: string }) {
   const calcs = (Object.keys(calcNodes) as CalcKind[]).map((kind) => {
     return calcNodes[kind].extend({ addNodeView: () => ReactNodeViewRenderer(calcViews[kind]) });
   });
-  return [...baseExtensions(), ...calcs, CalcCommands, Placeholder.configure({ placeholder: "Write the narrative, or type /truss, /cut, /formula … to insert a calc." })];
+  // The figure view uploads to this package's store; the schema node stays React-free for the server.
+  const figure = figureNode.extend({ addOptions: () => ({ packageId }), addNodeView: () => ReactNodeViewRenderer(FigureView) });
+  return [...baseExtensions().filter((e) => e.name !== "figure"), figure, ...calcs, CalcCommands, Placeholder.configure({ placeholder: "Write the narrative, or type /truss, /cut, /formula … to insert a calc." })];
 }

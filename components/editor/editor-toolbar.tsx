@@ -21,6 +21,7 @@ export function EditorToolbar({ editor }: { editor: Editor }) {
       {btn("1. List", editor.isActive("orderedList"), () => editor.chain().focus().toggleOrderedList().run())}
       {btn("Table", false, () => editor.chain().focus().insertTable({ rows: 3, cols: 3, withHeaderRow: true }).run())}
       {btn("Reference", false, () => editor.chain().focus().insertContent({ type: "standardReference", attrs: { code: "EN 1990", edition: "2002", clause: "6.4.3.2" } }).run(), "Code or standard reference")}
+      {btn("Figure", false, () => editor.chain().focus().insertContent({ type: "figure", attrs: { src: null, caption: "" } }).run(), "Figure with an uploaded image")}
       {btn("Page break", false, () => editor.chain().focus().insertContent({ type: "pageBreak" }).run())}
       <label className="ml-2 flex items-center gap-1 text-sm">
         <span className="text-ink-soft">Insert calc</span>

@@ -30,7 +30,7 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
   const editor = useEditor({
     immediatelyRender: false,
     editable: canEdit,
-    extensions: editorExtensions(),
+    extensions: editorExtensions({ packageId }),
     content: initialDocument,
     editorProps: { attributes: { class: "prose prose-stone max-w-none font-serif pp-document focus:outline-none", "aria-label": "Package text" } },
     onUpdate: ({ editor: e }) => {

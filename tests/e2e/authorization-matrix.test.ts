@@ -6,6 +6,9 @@ import { closeDb, db } from "@/db/knex";
 import { ApiClient } from "../support/api-client";
 import { demoIds, demoLogin, otherFirmLogin } from "../support/demo-fixtures";
 import { seedPackage, seedUser } from "../support/seed";
+import { pngForm, TINY_PNG } from "../support/tiny-png";
+import { figureKey } from "@/lib/figures/figure-key";
+import { putObject } from "@/lib/storage/put-object";
 
 /**
  * Every route handler × every kind of caller → the status each must get.
@@ -104,6 +107,22 @@ const matrix: Row[] = [
     route: "/api/v1/packages/[packageId]/document",
     prepare: async (i) => ({ path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId })).id}/document`, body: { version: 1, document: { type: "doc", content: [] } } }),
     expect: { anon: 401, engineer: 200, checker: 403, pe: 200, admin: 403, other: 404 },
+  },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/figures",
+    prepare: async (i) => ({ path: `/api/v1/packages/${i.packageId}/figures`, body: pngForm() }),
+    expect: { anon: 401, engineer: 201, checker: 403, pe: 201, admin: 403, other: 404 },
+  },
+  {
+    method: "GET",
+    route: "/api/v1/packages/[packageId]/figures/[figureId]",
+    prepare: async (i) => {
+      const id = randomUUID();
+      await putObject({ key: figureKey(i.firmId, i.packageId, id), body: TINY_PNG, contentType: "image/png" });
+      return { path: `/api/v1/packages/${i.packageId}/figures/${id}` };
+    },
+    expect: readers,
   },
   { method: "GET", route: "/api/v1/firm/members", prepare: async () => ({ path: "/api/v1/firm/members" }), expect: { ...all(200), anon: 401 } },
   {

@@ -30,8 +30,9 @@ export class ApiClient {
   }
 
   async request(method: string, path: string, body?: unknown, rawBody?: string): Promise<ApiResponse> {
-    const payload = rawBody ?? (body === undefined ? undefined : JSON.stringify(body));
-    const res = await this.raw(method, path, payload, payload === undefined ? undefined : "application/json");
+    // FormData goes as multipart with the boundary fetch chooses; anything else as JSON.
+    const payload = body instanceof FormData ? body : (rawBody ?? (body === undefined ? undefined : JSON.stringify(body)));
+    const res = await this.raw(method, path, payload, payload === undefined || payload instanceof FormData ? undefined : "application/json");
     const text = await res.text();
     let parsed: unknown = undefined;
     try {
@@ -42,7 +43,12 @@ export class ApiClient {
     return { status: res.status, body: parsed, text };
   }
 
-  private async raw(method: string, path: string, body: string | undefined, contentType: string | undefined): Promise<Response> {
+  /** The raw response, for binary bodies (images, PDFs). */
+  get(path: string): Promise<Response> {
+    return this.raw("GET", path, undefined, undefined);
+  }
+
+  private async raw(method: string, path: string, body: string | FormData | undefined, contentType: string | undefined): Promise<Response> {
     const headers: Record<string, string> = {};
     if (contentType) headers["content-type"] = contentType;
     if (this.cookies.size) headers.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");

@@ -7,12 +7,12 @@ import type { TrussUnitText } from "./truss-unit-text";
 /** The columns of each Truss input table, with the truss's unit on every value. */
 export function trussColumns(u: TrussUnitText) {
   const joints: InputColumn<JointRow>[] = [
-    { key: "id", label: "Joint", kind: "text", width: "6rem", required: true, aliases: ["label", "name", "joint"] },
+    { key: "id", label: "Label", kind: "text", width: "6rem", required: true, aliases: ["name", "joint", "id"] },
     { key: "x", label: "x", unit: u.length, kind: "number" },
     { key: "y", label: "y", unit: u.length, kind: "number" },
   ];
   const members: InputColumn<MemberRow>[] = [
-    { key: "id", label: "Member", kind: "text", width: "6rem", required: true, aliases: ["label", "name", "member"] },
+    { key: "id", label: "Label", kind: "text", width: "6rem", required: true, aliases: ["name", "member", "id"] },
     { key: "start", label: "Start", kind: "text", width: "5rem", aliases: ["from", "i", "start joint"] },
     { key: "end", label: "End", kind: "text", width: "5rem", aliases: ["to", "j", "end joint"] },
     { key: "A", label: "A", unit: u.area, kind: "number", aliases: ["area"] },

@@ -14,10 +14,12 @@ export function trussSummary(view: TrussView | null | undefined): string {
   const state = view.classification === "indeterminate" ? `Stable, indeterminate to degree ${view.counts.m + view.counts.r - 2 * view.counts.j}` : "Stable, determinate";
   let tension: Extreme | null = null;
   let compression: Extreme | null = null;
+  // A symmetric truss has equal forces that differ in round-off only; the first of them is named, as a reader would.
+  const beyond = (a: number, b: number) => Math.abs(a) > Math.abs(b) * (1 + 1e-9);
   for (const c of view.cases) {
     for (const f of c.forces) {
-      if (f.sense === "tension" && (!tension || f.force > tension.force)) tension = { member: f.member, force: f.force, caseId: c.id };
-      if (f.sense === "compression" && (!compression || f.force < compression.force)) compression = { member: f.member, force: f.force, caseId: c.id };
+      if (f.sense === "tension" && (!tension || beyond(f.force, tension.force))) tension = { member: f.member, force: f.force, caseId: c.id };
+      if (f.sense === "compression" && (!compression || beyond(f.force, compression.force))) compression = { member: f.member, force: f.force, caseId: c.id };
     }
   }
   if (!tension && !compression) return view.cases.length === 0 ? `${state} · no load cases yet` : `${state} · every member at zero force`;
