@@ -27,10 +27,6 @@ export function renderCalcView(view: ComponentType<NodeViewProps>, calc: CalcNod
   const editable = options.editable ?? true;
   const evaluation = options.evaluation ?? evaluateCalcs({ calcs });
   const value = { evaluation, editable, unitSystem: "SI" as const, labels: calcs.map((c) => c.label) };
-  return renderToStaticMarkup(createElement(CalcProvider, { value }, createElement(view, nodeViewProps(calc, [], editable))));
+  return renderToStaticMarkup(createElement(CalcProvider, { value, children: createElement(view, nodeViewProps(calc, [], editable)) }));
 }
 
-/** The markup without KaTeX's and the diagram's inner markup, for readable substring checks. */
-export function withoutMath(html: string): string {
-  return html.replace(/<span class="katex-display[\s\S]*?<\/div>/g, "[tex]</div>");
-}

@@ -53,16 +53,31 @@ describe("TrussView", () => {
     expect(html).toContain('data-testid="calc-summary">Stable, determinate · max tension 133.3 kN (L2L3) · max compression −150 kN (U2U3) in case Q</footer>');
   });
 
-  it("marks the wrong field and the wrong member when an input is invalid", () => {
+  it("marks the wrong field, and says which member it cannot draw", () => {
     const broken = withInputs(calcs, "T1", (i) => {
       (i.members as { end: string }[])[3].end = "X9";
     });
     const out = renderCalcView(TrussView, demoCalc("T1", broken), broken);
-    expect(out).toContain("✕ 1 problem");
+    expect(out).toContain("Members (21)<span class=\"ml-1.5 text-xs text-compression\">✕ 1 problem</span>");
     expect(out).toContain('data-solved="false"');
-    expect(out).toMatch(/data-member="L3L4"[^>]*>/);
-    expect(out).toContain("Input error (!)");
+    expect(out).toContain("Not drawn (joint missing or both ends at one point): L3L4.");
     expect(out).toContain("Not solved: fix the marked inputs first.");
+  });
+
+  it("marks a drawn member or joint whose input is wrong, in the drawing as well as the table", () => {
+    // The runtime reports the first problem it meets, so each is tried on its own.
+    const badArea = withInputs(calcs, "T1", (i) => {
+      (i.members as { A: number }[])[2].A = -5;
+    });
+    const member = renderCalcView(TrussView, demoCalc("T1", badArea), badArea);
+    expect(/data-member="L2L3"[^>]*>(?:(?!data-member=).)*data-invalid-marker/.test(member)).toBe(true);
+    expect(member.includes("Input error (!)")).toBe(true);
+    const badRoller = withInputs(calcs, "T1", (i) => {
+      (i.supports as { direction?: number[] }[])[1].direction = [0, 0];
+    });
+    const joint = renderCalcView(TrussView, demoCalc("T1", badRoller), badRoller);
+    expect(joint.includes("L6 !")).toBe(true);
+    expect(joint.includes("Supports (2)<span class=\"ml-1.5 text-xs text-compression\">✕ 1 problem</span>")).toBe(true);
   });
 
   it("read-only, renders the same tables without controls", () => {

@@ -125,7 +125,7 @@ function substituted(
   const parts: string[] = [];
   if (eq.constant !== 0) parts.push(texQty(eq.constant, unit));
   if (ck !== 0) parts.push(`${parts.length && ck > 0 ? "+ " : ""}${ck < 0 ? "-" : ""}${texNum(Math.abs(ck))}\,${texQtyParen(value, unit)}`);
-  const numerator = `-\left[${parts.join(" ") || "0"}\right]`;
+  const numerator = `-\\left[${parts.join(" ") || "0"}\\right]`;
   const unity = Math.abs(c - 1) < 1e-12;
   const step = solvedForceStep(id, numerator, unity ? null : texNum(c), result, unit);
   steps.push({ latex: step.latex, text: `From ${from}: ${step.text}` });

@@ -10,7 +10,8 @@ export function combinationsSummary(view: CombinationsViewData, setName: string)
   const count = `${view.combinations.length} ${view.combinations.length === 1 ? "combination" : "combinations"} (${setName})`;
   let top: { member: string; value: number; combination: string } | null = null;
   for (const m of view.members) {
-    for (const e of [m.max, m.min]) if (!top || Math.abs(e.value) > Math.abs(top.value)) top = { member: m.member, value: e.value, combination: e.combination };
+    // Symmetric members differ only by round-off: the first in the list is kept, so the line does not flip between them as loads change.
+    for (const e of [m.max, m.min]) if (!top || Math.abs(e.value) > Math.abs(top.value) * (1 + 1e-9)) top = { member: m.member, value: e.value, combination: e.combination };
   }
   if (!top) return count;
   return `${count}; largest member force ${top.member} ${formatQuantity(top.value, view.units.force)} (${forceSenseText(top.value)}) by ${top.combination}`;

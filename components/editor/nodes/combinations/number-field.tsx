@@ -7,8 +7,10 @@ import type { CellValue, InputColumn } from "@/components/editor/input-table/inp
 
 export type NumberFieldProps = {
   label: ReactNode;
-  /** Accessible name, e.g. "fy (MPa), member U1U2"; the visible label may be a symbol. */
+  /** Spoken name, e.g. "yield strength fy"; the visible label may be a symbol. */
   name: string;
+  /** Whose value it is, e.g. "member U1U2": read after the unit, "fy (MPa), member U1U2". */
+  owner?: string;
   unit?: string;
   value: number | undefined;
   onChange: (value: number | undefined) => void;
@@ -27,9 +29,9 @@ const ignore = () => undefined;
  * so a half-typed value ("1.", "-") is kept as typed and a value that is not
  * a number is marked where it was typed.
  */
-export function NumberField({ label, name, unit, value, onChange, readOnly, error, blankMeans, className }: NumberFieldProps) {
+export function NumberField({ label, name, owner, unit, value, onChange, readOnly, error, blankMeans, className }: NumberFieldProps) {
   const id = useId();
-  const accessible = `${name}${unit ? ` (${unit})` : ""}`;
+  const accessible = `${name}${unit ? ` (${unit})` : ""}${owner ? `, ${owner}` : ""}`;
   return (
     <div className={className}>
       <span className="pp-label normal-case tracking-normal">

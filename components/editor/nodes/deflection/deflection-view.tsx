@@ -37,7 +37,7 @@ export function DeflectionView(props: NodeViewProps) {
       <FieldErrorList errors={errors} shownOnField={(p) => OWN_FIELDS.has(p)} />
       {view && <DeflectionCheck view={view} />}
       {view && table && (
-        <details>
+        <details open>
           <summary className="cursor-pointer text-xs text-ink-soft">Virtual work table ({table.rows.length} members)</summary>
           <div className="mt-2">
             <VirtualWorkTable table={table} symbol={`δ${view.direction} at ${view.joint}`} />

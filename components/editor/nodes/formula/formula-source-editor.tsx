@@ -36,7 +36,7 @@ export function FormulaSourceEditor({ source, onChange, readOnly, errorLines, de
           {lines.map((_, i) => {
             const bad = errorLines.has(i + 1);
             return (
-              <li key={i} className={`px-2 text-right tabular-nums ${bad ? "bg-compression-light font-semibold text-compression" : ""}`} title={errorLines.get(i + 1)}>
+              <li key={i} className={bad ? "bg-compression-light px-2 text-right font-semibold tabular-nums text-compression" : "px-2 text-right tabular-nums"} title={errorLines.get(i + 1)}>
                 {bad ? "✕\u2009" : ""}
                 {i + 1}
               </li>

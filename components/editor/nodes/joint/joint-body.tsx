@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo } from "react";
+import { memo, useMemo } from "react";
 import { TrussDiagram } from "@/components/diagrams/truss-diagram";
 import { StepList } from "@/components/math/step-list";
 import type { CalcResult } from "@/lib/calcs/calc-types";
@@ -31,7 +31,7 @@ export type JointBodyProps = {
  * forces found with tension or compression, and zero-force members by
  * inspection with the rule that shows each.
  */
-export function JointBody({ label, inputs, result, sources, editable, setInputs }: JointBodyProps) {
+export const JointBody = memo(function JointBody({ label, inputs, result, sources, editable, setInputs }: JointBodyProps) {
   const draft = useMemo(() => readJointDraft(inputs), [inputs]);
   const view = (result?.status === "ok" ? result.view : null) as JointView | null;
   const errors = result?.fieldErrors ?? [];
@@ -83,4 +83,4 @@ export function JointBody({ label, inputs, result, sources, editable, setInputs 
       {zero && <ZeroForceList inspection={zero} caseId={caseId} />}
     </>
   );
-}
+});

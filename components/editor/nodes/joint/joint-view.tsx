@@ -1,20 +1,17 @@
 "use client";
 
 import type { NodeViewProps } from "@tiptap/react";
-import { useMemo } from "react";
 import type { JointView as JointViewData } from "@/lib/calcs/joint/joint-view";
-import { useCalcContext } from "../../calc-context";
 import { CalcFrame } from "../../calc-frame";
 import { useCalcNode } from "../../use-calc-node";
-import { trussSources } from "../truss/truss-sources";
+import { useTrussSources } from "../truss/use-truss-sources";
 import { JointBody } from "./joint-body";
 import { jointSummary } from "./joint-summary";
 
 /** The Joint calc in the editor: method of joints on a Truss calc, at one joint or in sequence. */
 export function JointView(props: NodeViewProps) {
   const calc = useCalcNode<unknown>(props);
-  const { evaluation } = useCalcContext();
-  const sources = useMemo(() => trussSources(evaluation), [evaluation]);
+  const sources = useTrussSources();
   const view = calc.result?.status === "ok" ? (calc.result.view as JointViewData) : null;
   return (
     <CalcFrame kind="joint" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={jointSummary(view)}>

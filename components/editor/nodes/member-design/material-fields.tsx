@@ -47,7 +47,8 @@ export function MaterialFields({ props, material, units, owner, path, errors, re
           <NumberField
             key={f.key}
             label={f.label}
-            name={`${f.name}, ${owner}`}
+            name={f.name}
+            owner={owner}
             unit={unit}
             value={typeof props[f.key] === "number" ? Number(props[f.key]) : undefined}
             onChange={(v) => onField(f.key, v)}

@@ -53,7 +53,8 @@ export function MemberRowEditor({ row, index, material, system, units, memberOpt
         />
         <NumberField
           label="K"
-          name={`effective length factor K, ${owner}`}
+          name="effective length factor K"
+          owner={owner}
           value={typeof row.props.K === "number" ? row.props.K : undefined}
           onChange={(K) => onChange({ ...row, props: { ...row.props, K } })}
           readOnly={readOnly}

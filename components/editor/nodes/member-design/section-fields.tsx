@@ -33,7 +33,8 @@ export function SectionFields({ section, material, length, owner, path, errors, 
         <NumberField
           key={f.key}
           label={f.label}
-          name={`${f.name}, ${owner}`}
+          name={f.name}
+          owner={owner}
           unit={f.area ? `${length}²` : length}
           value={typeof section[f.key] === "number" ? Number(section[f.key]) : undefined}
           onChange={(v) => onField(f.key, v)}

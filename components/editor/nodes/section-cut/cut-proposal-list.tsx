@@ -10,7 +10,7 @@ export type CutProposalListProps = {
   model: TrussModel;
   panel: number | string | undefined;
   readOnly: boolean;
-  onPanel: (panel: number | undefined) => void;
+  onPanel: (panel: number | string | undefined) => void;
   onUse: (cut: { members: string[]; keep: string }) => void;
 };
 
@@ -25,7 +25,7 @@ export function CutProposalList({ model, panel, readOnly, onPanel, onUse }: CutP
     <section aria-label="Proposed cuts" className="space-y-1.5">
       <label className="inline-flex items-center gap-2 text-sm">
         <span className="pp-label mb-0">Propose a cut through</span>
-        <select className="pp-input w-auto py-0.5" value={panel === undefined ? "" : String(panel)} disabled={readOnly} onChange={(e) => onPanel(e.target.value === "" ? undefined : Number(e.target.value))}>
+        <select className="pp-input w-auto py-0.5" value={panel === undefined ? "" : String(panel)} disabled={readOnly} onChange={(e) => onPanel(panelValue(e.target.value))}>
           <option value="">anywhere</option>
           {panels.map((p) => (
             <option key={p.index} value={p.index}>
@@ -50,4 +50,10 @@ export function CutProposalList({ model, panel, readOnly, onPanel, onUse }: CutP
       </ol>
     </section>
   );
+}
+
+/** A panel as the select gives it: blank for anywhere, an index, or the bottom-chord member it was named by. */
+function panelValue(text: string): number | string | undefined {
+  if (text === "") return undefined;
+  return /^\d+$/.test(text) ? Number(text) : text;
 }

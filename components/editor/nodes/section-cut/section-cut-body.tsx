@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { memo, useMemo, useState } from "react";
 import { TrussDiagram } from "@/components/diagrams/truss-diagram";
 import { StepList } from "@/components/math/step-list";
 import type { CalcResult } from "@/lib/calcs/calc-types";
@@ -31,7 +31,7 @@ export type SectionCutBodyProps = {
  * free body, each cut force with how it was found, and the check against the
  * full solution.
  */
-export function SectionCutBody({ label, inputs, result, sources, editable, setInputs }: SectionCutBodyProps) {
+export const SectionCutBody = memo(function SectionCutBody({ label, inputs, result, sources, editable, setInputs }: SectionCutBodyProps) {
   const draft = useMemo(() => readSectionCutDraft(inputs), [inputs]);
   const [proposing, setProposing] = useState(false);
   const view = (result?.status === "ok" ? result.view : null) as SectionCutView | null;
@@ -95,4 +95,4 @@ export function SectionCutBody({ label, inputs, result, sources, editable, setIn
       {result && <StepList steps={result.steps} />}
     </>
   );
-}
+});

@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { memo, useMemo, useState } from "react";
 import type { CalcResult, TrussValue } from "@/lib/calcs/calc-types";
 import type { TrussView } from "@/lib/calcs/truss/truss-view";
 import { caseSteps } from "./case-steps";
@@ -22,8 +22,11 @@ export type TrussBodyProps = {
   setInputs: (next: unknown) => void;
 };
 
-/** The Truss calc's body: units, input tabs, and the results of the chosen case. */
-export function TrussBody({ label, inputs, result, editable, packageSystem, setInputs }: TrussBodyProps) {
+/**
+ * The Truss calc's body: units, input tabs, and the results of the chosen case.
+ * Memoised, so a keystroke in another calc does not redraw these tables.
+ */
+export const TrussBody = memo(function TrussBody({ label, inputs, result, editable, packageSystem, setInputs }: TrussBodyProps) {
   const draft = useMemo(() => readTrussDraft(inputs), [inputs]);
   const view = (result?.view ?? null) as TrussView | null;
   const exported = result?.exports.model;
@@ -49,4 +52,4 @@ export function TrussBody({ label, inputs, result, editable, packageSystem, setI
       <TrussResults label={label} solved={solved} draftModel={drawn} view={view} steps={steps} cases={cases} caseId={caseId} onCase={setChosen} invalid={invalid} />
     </>
   );
-}
+});

@@ -55,6 +55,8 @@ export function TrussResults({ label, solved, draftModel, view, steps, cases, ca
           invalidJoints={invalid.joints}
           invalidMembers={invalid.members}
           showReactions={result !== undefined}
+          // Before solving the key still has a job: saying what the error marks mean.
+          showLegend={result !== undefined || invalid.joints.length + invalid.members.length > 0}
         />
       </div>
       {caseView && (
