@@ -40,6 +40,8 @@ const cellAttrs = z
     colspan: z.number().int().min(1).max(100).optional(),
     rowspan: z.number().int().min(1).max(1000).optional(),
     colwidth: z.array(z.number().int().min(0).max(10000)).max(100).nullable().optional(),
+    // The table extension records each cell's text alignment.
+    align: z.enum(["left", "center", "right"]).nullable().optional(),
   })
   .optional();
 const cell = (type: "tableCell" | "tableHeader") => z.strictObject({ type: z.literal(type), attrs: cellAttrs, content: blocks().min(1) });
