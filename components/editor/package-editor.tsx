@@ -2,9 +2,9 @@
 
 import type { JSONContent } from "@tiptap/core";
 import { EditorContent, useEditor } from "@tiptap/react";
-import { useEffect, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import { SafetyNotice } from "@/components/shell/safety-notice";
-import { CalcProvider } from "./calc-context";
+import { CalcProvider, CalcStore } from "./calc-context";
 import { ConflictBanner } from "./conflict-banner";
 import { DocumentOutline } from "./document-outline";
 import { EditorToolbar } from "./editor-toolbar";
@@ -51,7 +51,10 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
     }
   }, [editor, autosave.restored, recompute]);
 
-  const labels = Object.values(evaluation.results).map((r) => r.label);
+  // The store is created once; node views subscribe to the results they show.
+  const [store] = useState(() => new CalcStore(evaluation));
+  useEffect(() => store.set(evaluation), [store, evaluation]);
+  const calcContext = useMemo(() => ({ store, editable: canEdit, unitSystem }), [store, canEdit, unitSystem]);
   const calcIndexStatus = (index: number) => {
     const id = doc.content?.[index]?.attrs?.id as string | undefined;
     return id ? evaluation.results[id]?.status : undefined;
@@ -92,7 +95,7 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
         )}
         <div className="pp-panel">
           {editor && canEdit && <EditorToolbar editor={editor} />}
-          <CalcProvider value={{ evaluation, editable: canEdit, unitSystem, labels }}>
+          <CalcProvider value={calcContext}>
             <div className="px-8 py-6">
               <EditorContent editor={editor} />
             </div>

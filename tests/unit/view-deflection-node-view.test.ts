@@ -2,7 +2,7 @@ import type { NodeViewProps } from "@tiptap/react";
 import { createElement } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
-import { CalcProvider } from "@/components/editor/calc-context";
+import { CalcProvider, CalcStore } from "@/components/editor/calc-context";
 import { DeflectionView } from "@/components/editor/nodes/deflection/deflection-view";
 import type { CalcNode } from "@/lib/calcs/calc-types";
 import { evaluateCalcs } from "@/lib/calcs/evaluate-calcs";
@@ -15,7 +15,7 @@ function renderView(calcs: CalcNode[], label: string, editable: boolean): string
   const evaluation = evaluateCalcs({ calcs });
   const props = { node: { attrs: { id: c.id, label: c.label, inputs: c.inputs }, type: { name: c.kind } }, updateAttributes: () => undefined, editor: { isEditable: editable }, selected: false };
   const view = createElement(DeflectionView, props as unknown as NodeViewProps);
-  return renderToStaticMarkup(createElement(CalcProvider, { value: { evaluation, editable, unitSystem: "SI", labels: calcs.map((x) => x.label) }, children: view }));
+  return renderToStaticMarkup(createElement(CalcProvider, { value: { store: new CalcStore(evaluation), editable, unitSystem: "SI" }, children: view }));
 }
 
 describe("DeflectionView", () => {

@@ -1,7 +1,7 @@
 import type { NodeViewProps } from "@tiptap/react";
 import { createElement, type ComponentType } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
-import { CalcProvider } from "@/components/editor/calc-context";
+import { CalcProvider, CalcStore } from "@/components/editor/calc-context";
 import type { CalcNode, PackageEvaluation } from "@/lib/calcs/calc-types";
 import { evaluateCalcs } from "@/lib/calcs/evaluate-calcs";
 
@@ -26,7 +26,7 @@ export function nodeViewProps(calc: CalcNode, written: unknown[] = [], editable 
 export function renderCalcView(view: ComponentType<NodeViewProps>, calc: CalcNode, calcs: CalcNode[], options: { editable?: boolean; evaluation?: PackageEvaluation } = {}): string {
   const editable = options.editable ?? true;
   const evaluation = options.evaluation ?? evaluateCalcs({ calcs });
-  const value = { evaluation, editable, unitSystem: "SI" as const, labels: calcs.map((c) => c.label) };
+  const value = { store: new CalcStore(evaluation), editable, unitSystem: "SI" as const };
   return renderToStaticMarkup(createElement(CalcProvider, { value, children: createElement(view, nodeViewProps(calc, [], editable)) }));
 }
 

@@ -8,7 +8,7 @@ export type TrussSource = { label: string; kind: "truss" | "combinations"; value
  * with its solved truss when it has one (null while it has a problem), for
  * the pickers of the Section cut, Joint and other reading calcs.
  */
-export function trussSources(evaluation: PackageEvaluation): TrussSource[] {
+export function trussSources(evaluation: { results: PackageEvaluation["results"] }): TrussSource[] {
   return Object.values(evaluation.results).flatMap((r) => {
     if (r.kind !== "truss" && r.kind !== "combinations") return [];
     const v = r.exports.model;
