@@ -1,5 +1,6 @@
 import { Extension, InputRule, type Editor } from "@tiptap/core";
 import type { Node as PmNode } from "@tiptap/pm/model";
+import { NodeSelection } from "@tiptap/pm/state";
 import { calcKinds, type CalcKind } from "@/lib/calcs/calc-types";
 import { calcCommand } from "./calc-kind-name";
 import { newCalcAttrs } from "./new-calc-attrs";
@@ -34,9 +35,10 @@ export const CalcCommands = Extension.create({
       insertCalc:
         (kind) =>
         ({ state, chain }) =>
-          chain()
-            .insertContent({ type: kind, attrs: newCalcAttrs(kind, labelsIn(state.doc)) })
-            .run(),
+          // With a calc (or any node) selected, put the new one after it rather than replacing it.
+          state.selection instanceof NodeSelection
+            ? chain().insertContentAt(state.selection.to, { type: kind, attrs: newCalcAttrs(kind, labelsIn(state.doc)) }).run()
+            : chain().insertContent({ type: kind, attrs: newCalcAttrs(kind, labelsIn(state.doc)) }).run(),
     };
   },
   addInputRules() {
