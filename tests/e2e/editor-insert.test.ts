@@ -1,29 +1,19 @@
-import type { Browser } from "puppeteer-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeDb, db } from "@/db/knex";
+import { describe, expect, it } from "vitest";
+import { db } from "@/db/knex";
 import { BASE_URL } from "../support/api-client";
-import { launchBrowser } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
 import { signInPage } from "../support/browser-session";
-import { demoIds, demoLogin } from "../support/demo-fixtures";
+import { demoLogin } from "../support/demo-fixtures";
 import { seedPackage } from "../support/seed";
 
-let browser: Browser;
-let close: () => Promise<void>;
-
-beforeAll(async () => {
-  ({ browser, close } = await launchBrowser());
-});
-afterAll(async () => {
-  await close();
-  await closeDb();
-});
+const suite = browserSuite();
 
 describe("inserting calcs", () => {
   it("inserts a calc by typing its command at the start of a line and another from the menu, each with the next free label, and saves them", async () => {
-    const ids = await demoIds();
-    const { id } = await seedPackage({ projectId: ids.footbridgeId, title: "Insert test" });
-    const page = await signInPage(browser, demoLogin("engineer").email, demoLogin("engineer").password);
-    await page.goto(`${BASE_URL}/projects/${ids.footbridgeId}/packages/${id}`, { waitUntil: "networkidle0" });
+    const ids = suite.ids;
+    const { id } = await seedPackage({ projectId: suite.ids.footbridgeId, title: "Insert test" });
+    const page = await signInPage(suite.browser, demoLogin("engineer").email, demoLogin("engineer").password);
+    await page.goto(`${BASE_URL}/projects/${suite.ids.footbridgeId}/packages/${id}`, { waitUntil: "networkidle0" });
     await page.click(".ProseMirror");
     await page.keyboard.type("Loads are derived below.");
     await page.keyboard.press("Enter");

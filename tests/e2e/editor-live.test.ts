@@ -1,23 +1,12 @@
-import type { Browser, Page } from "puppeteer-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeDb, db } from "@/db/knex";
+import type { Page } from "puppeteer-core";
+import { describe, expect, it } from "vitest";
+import { db } from "@/db/knex";
 import { BASE_URL } from "../support/api-client";
-import { launchBrowser } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
 import { signInPage } from "../support/browser-session";
-import { demoIds, demoLogin } from "../support/demo-fixtures";
+import { demoLogin } from "../support/demo-fixtures";
 
-let browser: Browser;
-let close: () => Promise<void>;
-let ids: Awaited<ReturnType<typeof demoIds>>;
-
-beforeAll(async () => {
-  ({ browser, close } = await launchBrowser());
-  ids = await demoIds();
-});
-afterAll(async () => {
-  await close();
-  await closeDb();
-});
+const suite = browserSuite();
 
 const CUT = '[data-calc-label="S1"] [data-testid="cut-force"][data-member="U2U3"]';
 const UTIL = '[data-calc-label="M1"] [data-testid="utilization"][data-member="U2U3"] [data-testid="utilization-value"]';
@@ -37,9 +26,9 @@ async function openLoads(page: Page) {
 
 describe("live calcs in the footbridge package", () => {
   it("follows a load change in the truss into the section cut, the member utilization and the formula, without reloading, and keeps it after a reload", async () => {
-    const before = await db().from("packages").select("version").where({ id: ids.trussPackageId }).first();
-    const page = await signInPage(browser, demoLogin("engineer").email, demoLogin("engineer").password);
-    await page.goto(`${BASE_URL}/projects/${ids.footbridgeId}/packages/${ids.trussPackageId}`, { waitUntil: "networkidle0" });
+    const before = await db().from("packages").select("version").where({ id: suite.ids.trussPackageId }).first();
+    const page = await signInPage(suite.browser, demoLogin("engineer").email, demoLogin("engineer").password);
+    await page.goto(`${BASE_URL}/projects/${suite.ids.footbridgeId}/packages/${suite.ids.trussPackageId}`, { waitUntil: "networkidle0" });
 
     const cut0 = await valueOf(page, CUT);
     const util0 = await valueOf(page, UTIL);
@@ -59,7 +48,7 @@ describe("live calcs in the footbridge package", () => {
     expect(await valueOf(page, FORMULA)).toBeLessThan(formula0);
 
     await page.waitForFunction(() => /^\s*✓?\s*Saved/i.test(document.querySelector('[role="status"]')?.textContent ?? ""), { timeout: 20000 });
-    const after = await db().from("packages").select("version").where({ id: ids.trussPackageId }).first();
+    const after = await db().from("packages").select("version").where({ id: suite.ids.trussPackageId }).first();
     expect(after.version).toBeGreaterThan(before.version);
 
     await page.reload({ waitUntil: "networkidle0" });

@@ -1,26 +1,15 @@
-import type { Browser, Page } from "puppeteer-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeDb, db } from "@/db/knex";
+import type { Page } from "puppeteer-core";
+import { describe, expect, it } from "vitest";
+import { db } from "@/db/knex";
 import { ApiClient, BASE_URL } from "../support/api-client";
-import { launchBrowser } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
 import { signInPage, textOf } from "../support/browser-session";
-import { demoIds, demoLogin } from "../support/demo-fixtures";
+import { demoLogin } from "../support/demo-fixtures";
 import { seedPackage } from "../support/seed";
 
-let browser: Browser;
-let close: () => Promise<void>;
-let ids: Awaited<ReturnType<typeof demoIds>>;
+const suite = browserSuite();
 
-beforeAll(async () => {
-  ({ browser, close } = await launchBrowser());
-  ids = await demoIds();
-});
-afterAll(async () => {
-  await close();
-  await closeDb();
-});
-
-const packageUrl = (id: string) => `${BASE_URL}/projects/${ids.footbridgeId}/packages/${id}`;
+const packageUrl = (id: string) => `${BASE_URL}/projects/${suite.ids.footbridgeId}/packages/${id}`;
 
 async function openEditor(page: Page, id: string) {
   await page.goto(packageUrl(id), { waitUntil: "networkidle0" });
@@ -42,9 +31,9 @@ async function waitForSaved(page: Page) {
 
 describe("two people editing one package", () => {
   it("gives the second save the conflict message and keeps the author's text on screen; nothing is lost on either side", async () => {
-    const { id } = await seedPackage({ projectId: ids.footbridgeId, title: "Conflict test" });
-    const first = await signInPage(browser, demoLogin("engineer").email, demoLogin("engineer").password);
-    const second = await signInPage(browser, demoLogin("projectEngineer").email, demoLogin("projectEngineer").password);
+    const { id } = await seedPackage({ projectId: suite.ids.footbridgeId, title: "Conflict test" });
+    const first = await signInPage(suite.browser, demoLogin("engineer").email, demoLogin("engineer").password);
+    const second = await signInPage(suite.browser, demoLogin("projectEngineer").email, demoLogin("projectEngineer").password);
     await openEditor(first, id);
     await openEditor(second, id);
 
@@ -67,8 +56,8 @@ describe("two people editing one package", () => {
 
 describe("roles in the editor", () => {
   it("shows a checker the package read-only, with the same rendering and the caution", async () => {
-    const page = await signInPage(browser, demoLogin("checker").email, demoLogin("checker").password);
-    await openEditor(page, ids.trussPackageId);
+    const page = await signInPage(suite.browser, demoLogin("checker").email, demoLogin("checker").password);
+    await openEditor(page, suite.ids.trussPackageId);
     expect(await textOf(page, '[data-testid="read-only"]')).toMatch(/read-only/i);
     expect(await page.$eval(".ProseMirror", (el) => el.getAttribute("contenteditable"))).toBe("false");
     expect(await page.$$eval("[data-calc-label]", (els) => els.length)).toBeGreaterThanOrEqual(7);
@@ -78,7 +67,7 @@ describe("roles in the editor", () => {
 
   it("refuses a checker's save through the API", async () => {
     const checker = await ApiClient.signedIn(demoLogin("checker").email, demoLogin("checker").password);
-    const res = await checker.request("PUT", `/api/v1/packages/${ids.trussPackageId}/document`, { version: 1, document: { type: "doc", content: [] } });
+    const res = await checker.request("PUT", `/api/v1/packages/${suite.ids.trussPackageId}/document`, { version: 1, document: { type: "doc", content: [] } });
     expect(res.status).toBe(403);
   });
 });

@@ -1,27 +1,16 @@
-import type { Browser } from "puppeteer-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeDb } from "@/db/knex";
+import { describe, expect, it } from "vitest";
 import { BASE_URL } from "../support/api-client";
-import { launchBrowser } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
 import { signInPage, textOf, waitForPath } from "../support/browser-session";
 import { demoIds, demoLogin } from "../support/demo-fixtures";
 
-let browser: Browser;
-let close: () => Promise<void>;
-
-beforeAll(async () => {
-  ({ browser, close } = await launchBrowser());
-});
-afterAll(async () => {
-  await close();
-  await closeDb();
-});
+const suite = browserSuite();
 
 describe("inviting a member, end to end", () => {
   it("the project engineer invites a checker, the mail arrives, the link sets a password and the invitee signs in with that role", async () => {
     const { footbridgeId } = await demoIds();
     const email = `invitee-${Date.now()}@test.example`;
-    const pe = await signInPage(browser, demoLogin("projectEngineer").email, demoLogin("projectEngineer").password);
+    const pe = await signInPage(suite.browser, demoLogin("projectEngineer").email, demoLogin("projectEngineer").password);
     await pe.goto(`${BASE_URL}/projects/${footbridgeId}/members`, { waitUntil: "networkidle0" });
     const form = 'form[aria-label="Invite a member"]';
     await pe.type(`${form} input:not([type="email"])`, "Ines Invitee");
@@ -38,7 +27,7 @@ describe("inviting a member, end to end", () => {
     expect(link).toBeTruthy();
     await pe.browserContext().close();
 
-    const ctx = await browser.createBrowserContext();
+    const ctx = await suite.browser.createBrowserContext();
     const page = await ctx.newPage();
     await page.goto(link!.replace(/^https?:\/\/[^/]+/, BASE_URL), { waitUntil: "networkidle0" });
     expect(await textOf(page, "h1")).toContain("Ines Invitee");
@@ -49,7 +38,7 @@ describe("inviting a member, end to end", () => {
     await waitForPath(page, "/sign-in");
     await ctx.close();
 
-    const invitee = await signInPage(browser, email, "invitee-password-1");
+    const invitee = await signInPage(suite.browser, email, "invitee-password-1");
     await invitee.goto(`${BASE_URL}/projects/${footbridgeId}`, { waitUntil: "networkidle0" });
     expect(await textOf(invitee, '[data-testid="project-role"]')).toContain("Checker");
     await invitee.browserContext().close();

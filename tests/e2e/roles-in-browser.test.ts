@@ -1,23 +1,10 @@
-import type { Browser } from "puppeteer-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeDb } from "@/db/knex";
+import { describe, expect, it } from "vitest";
 import { BASE_URL } from "../support/api-client";
-import { launchBrowser } from "../support/browser";
+import { browserSuite } from "../support/browser-suite";
 import { signInPage, textOf, waitForPath } from "../support/browser-session";
-import { demoIds, demoLogin, otherFirmLogin } from "../support/demo-fixtures";
+import { demoLogin, otherFirmLogin } from "../support/demo-fixtures";
 
-let browser: Browser;
-let close: () => Promise<void>;
-let ids: Awaited<ReturnType<typeof demoIds>>;
-
-beforeAll(async () => {
-  ({ browser, close } = await launchBrowser());
-  ids = await demoIds();
-});
-afterAll(async () => {
-  await close();
-  await closeDb();
-});
+const suite = browserSuite();
 
 const cases = [
   { who: "engineer", login: demoLogin("engineer"), sees: ["Alder Creek Footbridge", "Millbrook Market Hall roof"], role: "Engineer" },
@@ -32,7 +19,7 @@ const allProjects = ["Alder Creek Footbridge", "Millbrook Market Hall roof", "Qu
 describe("each demo role in the real browser", () => {
   for (const c of cases) {
     it(`signs in as the ${c.who}, sees who is signed in and only the projects the role allows`, async () => {
-      const page = await signInPage(browser, c.login.email, c.login.password);
+      const page = await signInPage(suite.browser, c.login.email, c.login.password);
       expect(page.url()).toBe(`${BASE_URL}/projects`);
       expect(await textOf(page, '[data-testid="signed-in-as"]')).toContain(c.login.name);
       const table = await textOf(page, "table");
@@ -40,7 +27,7 @@ describe("each demo role in the real browser", () => {
         if ((c.sees as readonly string[]).includes(name)) expect(table).toContain(name);
         else expect(table).not.toContain(name);
       }
-      await page.goto(`${BASE_URL}/projects/${ids.footbridgeId}`, { waitUntil: "networkidle0" });
+      await page.goto(`${BASE_URL}/projects/${suite.ids.footbridgeId}`, { waitUntil: "networkidle0" });
       if (c.role) expect(await textOf(page, '[data-testid="project-role"]')).toContain(c.role);
       else expect(await page.content()).toContain("Not found");
       await page.browserContext().close();
@@ -48,18 +35,18 @@ describe("each demo role in the real browser", () => {
   }
 
   it("shows the checker no way to start a package, and the engineer one", async () => {
-    const checker = await signInPage(browser, demoLogin("checker").email, demoLogin("checker").password);
-    await checker.goto(`${BASE_URL}/projects/${ids.footbridgeId}`, { waitUntil: "networkidle0" });
+    const checker = await signInPage(suite.browser, demoLogin("checker").email, demoLogin("checker").password);
+    await checker.goto(`${BASE_URL}/projects/${suite.ids.footbridgeId}`, { waitUntil: "networkidle0" });
     expect(await checker.$('form[aria-label="New package"]')).toBeNull();
     await checker.browserContext().close();
-    const engineer = await signInPage(browser, demoLogin("engineer").email, demoLogin("engineer").password);
-    await engineer.goto(`${BASE_URL}/projects/${ids.footbridgeId}`, { waitUntil: "networkidle0" });
+    const engineer = await signInPage(suite.browser, demoLogin("engineer").email, demoLogin("engineer").password);
+    await engineer.goto(`${BASE_URL}/projects/${suite.ids.footbridgeId}`, { waitUntil: "networkidle0" });
     expect(await engineer.$('form[aria-label="New package"]')).not.toBeNull();
     await engineer.browserContext().close();
   });
 
   it("signs out back to the sign-in page, after which the projects page asks to sign in again", async () => {
-    const page = await signInPage(browser, demoLogin("engineer").email, demoLogin("engineer").password);
+    const page = await signInPage(suite.browser, demoLogin("engineer").email, demoLogin("engineer").password);
     await page.click("header button");
     await waitForPath(page, "/sign-in");
     await page.goto(`${BASE_URL}/projects`, { waitUntil: "networkidle0" });
@@ -68,7 +55,7 @@ describe("each demo role in the real browser", () => {
   });
 
   it("shows a wrong password as a message on the form", async () => {
-    const page = await signInPage(browser, demoLogin("checker").email, "not-the-password");
+    const page = await signInPage(suite.browser, demoLogin("checker").email, "not-the-password");
     expect(await textOf(page, '[role="alert"]')).toContain("E-mail or password is not right.");
     await page.browserContext().close();
   });
