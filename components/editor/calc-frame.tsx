@@ -1,7 +1,9 @@
 "use client";
 
 import { NodeViewWrapper } from "@tiptap/react";
-import { useState, type ReactNode } from "react";
+import { useRef, useState, type ReactNode } from "react";
+import { MathVisibility } from "@/components/math/math-visibility";
+import { useNearScreen } from "./use-near-screen";
 import type { CalcResult } from "@/lib/calcs/calc-types";
 import { calcKindName } from "./calc-kind-name";
 
@@ -21,8 +23,11 @@ export type CalcFrameProps = {
 export function CalcFrame({ kind, label, result, editable, selected, onRename, summary, children }: CalcFrameProps) {
   const [draft, setDraft] = useState(label);
   const status = result?.status ?? "ok";
+  const ref = useRef<HTMLDivElement>(null);
+  const near = useNearScreen(ref);
   return (
     <NodeViewWrapper
+      ref={ref}
       className={`pp-calc not-prose my-4 rounded-sm border bg-paper-raised ${selected ? "border-verdigris" : "border-rule-strong"}`}
       data-calc-label={label}
       data-calc-status={status}
@@ -52,7 +57,9 @@ export function CalcFrame({ kind, label, result, editable, selected, onRename, s
           ))}
         </ul>
       )}
-      <div className="space-y-3 px-3 py-3">{children}</div>
+      <MathVisibility.Provider value={near}>
+        <div className="space-y-3 px-3 py-3">{children}</div>
+      </MathVisibility.Provider>
       {summary && <footer className="border-t border-rule px-3 py-1.5 text-sm" data-testid="calc-summary">{summary}</footer>}
     </NodeViewWrapper>
   );

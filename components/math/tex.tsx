@@ -1,3 +1,4 @@
+import { useMathVisible } from "./math-visibility";
 import { renderTex } from "./render-tex";
 
 export type TexProps = {
@@ -13,6 +14,9 @@ export type TexProps = {
  * a clear box with the message and the source instead of breaking the calc.
  */
 export function Tex({ latex, display = false, className }: TexProps) {
+  const visible = useMathVisible();
+  // Off screen: keep the element and its source (for find and copy), typeset once scrolled into view.
+  if (!visible) return display ? <div className={className} data-tex-deferred="">{latex}</div> : <span className={className} data-tex-deferred="">{latex}</span>;
   const result = renderTex(latex, display);
   if (!result.ok) return <TexError latex={latex} message={result.message} display={display} />;
   const Tag = display ? "div" : "span";
