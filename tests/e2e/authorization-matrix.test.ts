@@ -131,6 +131,81 @@ const matrix: Row[] = [
     prepare: async (i) => ({ path: `/api/v1/firm/members/${(await seedUser({ firmId: i.firmId })).id}`, body: { disabled: true } }),
     expect: { anon: 401, engineer: 403, checker: 403, pe: 403, admin: 200, other: 404 },
   },
+  { method: "GET", route: "/api/v1/packages/[packageId]/remarks", prepare: async (i) => ({ path: `/api/v1/packages/${i.packageId}/remarks` }), expect: readers },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/remarks",
+    prepare: async (i) => ({ path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId })).id}/remarks`, body: { text: "Matrix remark." } }),
+    expect: { anon: 401, engineer: 201, checker: 201, pe: 201, admin: 403, other: 404 },
+  },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/remarks/[remarkId]/replies",
+    prepare: async (i) => {
+      // A fresh package with an open remark raised by the demo checker.
+      const pkg = await seedPackage({ projectId: i.footbridgeId });
+      const checker = await db().from("users").select("id").where({ email: demoLogin("checker").email }).first();
+      const [remark] = await db().insert({ packageId: pkg.id, text: "Matrix remark.", openedBy: checker.id }).into("remarks").returning("id");
+      return { path: `/api/v1/packages/${pkg.id}/remarks/${remark.id}/replies`, body: { text: "Matrix reply." } };
+    },
+    expect: { anon: 401, engineer: 201, checker: 201, pe: 201, admin: 403, other: 404 },
+  },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/remarks/[remarkId]/close",
+    prepare: async (i) => {
+      // The checker closes the remark they raised; the project engineer closes any remark.
+      const pkg = await seedPackage({ projectId: i.footbridgeId });
+      const checker = await db().from("users").select("id").where({ email: demoLogin("checker").email }).first();
+      const [remark] = await db().insert({ packageId: pkg.id, text: "Matrix remark.", openedBy: checker.id }).into("remarks").returning("id");
+      return { path: `/api/v1/packages/${pkg.id}/remarks/${remark.id}/close` };
+    },
+    expect: { anon: 401, engineer: 403, checker: 200, pe: 200, admin: 403, other: 404 },
+  },
+  {
+    method: "PUT",
+    route: "/api/v1/packages/[packageId]/checker",
+    prepare: async (i) => {
+      const checker = await db().from("users").select("id").where({ email: demoLogin("checker").email }).first();
+      return { path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId })).id}/checker`, body: { checkerId: checker.id } };
+    },
+    expect: { anon: 401, engineer: 403, checker: 403, pe: 200, admin: 403, other: 404 },
+  },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/submit",
+    prepare: async (i) => {
+      // A draft with its checker assigned, so submitting it can succeed.
+      const checker = await db().from("users").select("id").where({ email: demoLogin("checker").email }).first();
+      const [pkg] = await db().insert({ projectId: i.footbridgeId, title: "Matrix submit", status: "draft", assignedChecker: checker.id }).into("packages").returning("id");
+      return { path: `/api/v1/packages/${pkg.id}/submit` };
+    },
+    expect: { anon: 401, engineer: 200, checker: 403, pe: 200, admin: 403, other: 404 },
+  },
+  { method: "GET", route: "/api/v1/packages/[packageId]/check-progress", prepare: async (i) => ({ path: `/api/v1/packages/${i.packageId}/check-progress` }), expect: readers },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/calcs/[calcId]/check",
+    prepare: async (i) => {
+      // A package in check, assigned to the demo checker, with one formula calc to mark.
+      const checker = await db().from("users").select("id").where({ email: demoLogin("checker").email }).first();
+      const document = { type: "doc", content: [{ type: "formula", attrs: { id: "calc-mx-0001", label: "F1", inputs: { source: "q = 3 kN/m" } } }] };
+      const [pkg] = await db()
+        .insert({ projectId: i.footbridgeId, title: "Matrix check", status: "in_check", assignedChecker: checker.id, document: JSON.stringify(document) })
+        .into("packages")
+        .returning("id");
+      return { path: `/api/v1/packages/${pkg.id}/calcs/calc-mx-0001/check`, body: { state: "checked" } };
+    },
+    expect: { anon: 401, engineer: 403, checker: 200, pe: 403, admin: 403, other: 404 },
+  },
+  { method: "GET", route: "/api/v1/packages/[packageId]/revisions", prepare: async (i) => ({ path: `/api/v1/packages/${i.packageId}/revisions` }), expect: readers },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/revisions",
+    // A checked package with no calcs and no remarks: its check is complete, so the project engineer can issue it.
+    prepare: async (i) => ({ path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId, status: "checked" })).id}/revisions` }),
+    expect: { anon: 401, engineer: 403, checker: 403, pe: 201, admin: 403, other: 404 },
+  },
 ];
 
 let ids: Ids;
