@@ -14,6 +14,9 @@ export async function deletePackage({ actor, projectId, packageId }: DeletePacka
     if (pkg.status !== "draft") {
       throw new AppError("CONFLICT", `Only a draft package can be deleted; this one is ${pkg.status.replace("_", " ")}.`);
     }
+    // A draft that follows an issued revision is part of the record too: its revisions must stay.
+    const issued = await trx.from("revisions").where({ packageId }).first("id");
+    if (issued) throw new AppError("CONFLICT", "This package has issued revisions and cannot be deleted; its next draft can be edited instead.");
     await removePackage(packageId, trx);
     await recordAudit({ firmId: actor.firmId, actorId: actor.id, action: "package.delete", entityType: "package", entityId: packageId, projectId, data: { title: pkg.title } }, trx);
   });

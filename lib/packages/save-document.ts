@@ -3,6 +3,7 @@ import { AppError, notFound } from "@/lib/app-error";
 import type { PackageEvaluation } from "@/lib/calcs/calc-types";
 import type { ActingUser } from "@/lib/data/users";
 import { validatePackageDocument } from "@/lib/document/validate-package-document";
+import { settlePackageState } from "@/lib/review/settle-package-state";
 
 export type SaveDocumentOptions = { actor: ActingUser; projectId: string; packageId: string; version: number; document: unknown };
 
@@ -24,7 +25,7 @@ export async function saveDocument({ actor, projectId, packageId, version, docum
     const row = await trx
       .from("packages as k")
       .leftJoin("users as u", "u.id", "k.updatedBy")
-      .select("k.version", "k.status", "k.document", "k.updatedAt", "u.name as savedBy")
+      .select("k.version", "k.status", "k.document", "k.updatedAt", "k.title", "k.assignedChecker", "u.name as savedBy")
       .where({ "k.id": packageId, "k.projectId": projectId })
       .forUpdate("k")
       .first();
@@ -38,6 +39,8 @@ export async function saveDocument({ actor, projectId, packageId, version, docum
       .where({ id: packageId })
       .update({ document: JSON.stringify(checked.document), version: version + 1, updatedAt: trx.fn.now(), updatedBy: actor.id })
       .returning(["version", "updatedAt"]);
+    // A checked package whose calc inputs changed goes back to in check on this very save.
+    await settlePackageState({ actor, pkg: { id: packageId, projectId, title: row.title, status: row.status, assignedChecker: row.assignedChecker, document: checked.document }, trx });
     return { ok: true, version: saved.version, savedAt: new Date(saved.updatedAt).toISOString(), evaluation: checked.evaluation };
   });
 }

@@ -124,6 +124,12 @@ const matrix: Row[] = [
     },
     expect: readers,
   },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/next-revision",
+    prepare: async (i) => ({ path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId, status: "issued" })).id}/next-revision` }),
+    expect: { anon: 401, engineer: 200, checker: 403, pe: 200, admin: 403, other: 404 },
+  },
   { method: "GET", route: "/api/v1/firm/members", prepare: async () => ({ path: "/api/v1/firm/members" }), expect: { ...all(200), anon: 401 } },
   {
     method: "PATCH",

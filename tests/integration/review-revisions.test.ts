@@ -8,6 +8,7 @@ import { markCalc } from "@/lib/review/mark-calc";
 import { startNextRevision } from "@/lib/review/start-next-revision";
 import { submitForCheck } from "@/lib/review/submit-for-check";
 import { verifyFingerprint } from "@/lib/review/verify-fingerprint";
+import { deletePackage } from "@/lib/packages/delete-package";
 import { saveDocument } from "@/lib/packages/save-document";
 import { checkEveryCalc, reviewTeam, saveAs, statusOf, twoFormulaDocument } from "./review-fixtures";
 
@@ -115,5 +116,13 @@ describe("revision numbering", () => {
     const t = await checkedPackage();
     await db().from("projects").where({ id: t.project.id }).update({ revisionScheme: "alpha" });
     expect((await issueTwice(t)).map((r) => [r.number, r.label])).toEqual([[0, "A"], [1, "B"]]);
+  });
+});
+
+describe("a package with issued revisions", () => {
+  it("cannot be deleted, even as the next draft", async () => {
+    const t = await reviewTeam();
+    await db().insert({ packageId: t.packageId, number: 0, label: "0", document: JSON.stringify({ type: "doc", content: [] }), results: "{}", checkRecord: "[]", issuedBy: t.pe.id, issuedAt: new Date(), fingerprint: "f".repeat(64) }).into("revisions");
+    await expect(deletePackage({ actor: t.engineer, projectId: t.project.id, packageId: t.packageId })).rejects.toMatchObject({ code: "CONFLICT" });
   });
 });
