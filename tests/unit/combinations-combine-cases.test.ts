@@ -2,18 +2,7 @@ import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { combineCases, combineLoads } from "@/lib/solve/combinations";
 import type { CustomFactorSet } from "@/lib/solve/combinations";
-import { SolveError } from "@/lib/solve/errors";
-
-function invalidPath(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(SolveError);
-    expect((e as SolveError).code).toBe("INVALID");
-    return (e as SolveError).path;
-  }
-  throw new Error("expected a SolveError");
-}
+import { invalidPath } from "../support/solve-assertions";
 
 // Member forces of a small roof truss per case (tension positive), invented.
 const cases = [

@@ -1,26 +1,10 @@
 import fc from "fast-check";
-import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { combineLoads } from "@/lib/solve/combinations";
 import type { LoadAction, LoadStandard } from "@/lib/solve/combinations";
-import { SolveError } from "@/lib/solve/errors";
+import { rendersAll, invalidPath } from "../support/solve-assertions";
 
 const STANDARDS: LoadStandard[] = ["ASCE7-16-LRFD", "ASCE7-22-LRFD", "ASCE7-16-ASD", "EN1990-6.10", "EN1990-6.10ab"];
-
-function rendersAll(steps: { latex: string }[]): void {
-  for (const s of steps) expect(() => katex.renderToString(s.latex, { throwOnError: true, strict: "error" }), s.latex).not.toThrow();
-}
-
-function invalidPath(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(SolveError);
-    expect((e as SolveError).code).toBe("INVALID");
-    return (e as SolveError).path;
-  }
-  throw new Error("expected a SolveError");
-}
 
 const gravity: LoadAction[] = [
   { id: "D", kind: "D", value: 10 },

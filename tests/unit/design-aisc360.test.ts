@@ -1,23 +1,7 @@
 import fc from "fast-check";
-import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { aisc360 } from "@/lib/solve/design";
-import { SolveError } from "@/lib/solve/errors";
-
-function rendersAll(steps: { latex: string }[]): void {
-  for (const s of steps) expect(() => katex.renderToString(s.latex, { throwOnError: true, strict: "error" }), s.latex).not.toThrow();
-}
-
-function invalidPath(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(SolveError);
-    expect((e as SolveError).code).toBe("INVALID");
-    return (e as SolveError).path;
-  }
-  throw new Error("expected a SolveError");
-}
+import { rendersAll, invalidPath } from "../support/solve-assertions";
 
 describe("aisc360.tension", () => {
   it("is governed by yielding when the net section is close to the gross section", () => {

@@ -1,22 +1,6 @@
-import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { aisc360, checkMember, en1993, eulerLoad, nds, sectionProperties } from "@/lib/solve/design";
-import { SolveError } from "@/lib/solve/errors";
-
-function rendersAll(steps: { latex: string }[]): void {
-  for (const s of steps) expect(() => katex.renderToString(s.latex, { throwOnError: true, strict: "error" }), s.latex).not.toThrow();
-}
-
-function invalidPath(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(SolveError);
-    expect((e as SolveError).code).toBe("INVALID");
-    return (e as SolveError).path;
-  }
-  throw new Error("expected a SolveError");
-}
+import { rendersAll, invalidPath } from "../support/solve-assertions";
 
 const angle = { shape: "angle" as const, d: 4, b: 4, t: 0.25 };
 const steel = { material: "steel-aisc360" as const, Fy: 36, Fu: 58, E: 29000 };

@@ -1,26 +1,10 @@
 import fc from "fast-check";
-import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { en1993 } from "@/lib/solve/design";
 import type { BucklingCurve } from "@/lib/solve/design";
-import { SolveError } from "@/lib/solve/errors";
+import { rendersAll, invalidPath } from "../support/solve-assertions";
 
 const CURVES: BucklingCurve[] = ["a0", "a", "b", "c", "d"];
-
-function rendersAll(steps: { latex: string }[]): void {
-  for (const s of steps) expect(() => katex.renderToString(s.latex, { throwOnError: true, strict: "error" }), s.latex).not.toThrow();
-}
-
-function invalidPath(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(SolveError);
-    expect((e as SolveError).code).toBe("INVALID");
-    return (e as SolveError).path;
-  }
-  throw new Error("expected a SolveError");
-}
 
 describe("en1993.bucklingReduction", () => {
   it("is 1.0 up to λ̄ = 0.2 on every curve", () => {

@@ -1,23 +1,7 @@
 import fc from "fast-check";
-import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { nds } from "@/lib/solve/design";
-import { SolveError } from "@/lib/solve/errors";
-
-function invalidPath(fn: () => unknown): string | undefined {
-  try {
-    fn();
-  } catch (e) {
-    expect(e).toBeInstanceOf(SolveError);
-    expect((e as SolveError).code).toBe("INVALID");
-    return (e as SolveError).path;
-  }
-  throw new Error("expected a SolveError");
-}
-
-function rendersAll(steps: { latex: string }[]): void {
-  for (const s of steps) expect(() => katex.renderToString(s.latex, { throwOnError: true, strict: "error" }), s.latex).not.toThrow();
-}
+import { rendersAll, invalidPath } from "../support/solve-assertions";
 
 describe("nds.columnStability", () => {
   it("keeps Cp between 0 and 1 and below both 1 and FcE/Fc*", () => {
