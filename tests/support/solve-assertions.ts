@@ -18,3 +18,14 @@ export function invalidPath(fn: () => unknown): string | undefined {
   }
   throw new Error("expected a SolveError");
 }
+
+/** The SolveError that `fn` throws (any code); rethrows anything else, fails if nothing is thrown. */
+export function thrown(fn: () => unknown): SolveError {
+  try {
+    fn();
+  } catch (e) {
+    if (e instanceof SolveError) return e;
+    throw e;
+  }
+  throw new Error("expected a SolveError");
+}

@@ -1,19 +1,9 @@
 import katex from "katex";
 import { describe, expect, it } from "vitest";
 import { deflection } from "@/lib/solve/deflection";
-import { SolveError } from "@/lib/solve/errors";
 import type { TrussModel } from "@/lib/solve/types";
 import { pratt4, prattWithCounter, triangle } from "./sections-trusses";
-
-function thrown(fn: () => unknown): SolveError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof SolveError) return e;
-    throw e;
-  }
-  throw new Error("expected a SolveError");
-}
+import { thrown } from "../support/solve-assertions";
 
 const midspan = { loadCase: "D", joint: "L2", direction: "y" } as const;
 

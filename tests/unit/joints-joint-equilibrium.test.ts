@@ -1,19 +1,9 @@
 import katex from "katex";
 import { describe, expect, it } from "vitest";
-import { SolveError } from "@/lib/solve/errors";
 import { jointEquilibrium } from "@/lib/solve/joints";
 import type { TrussModel } from "@/lib/solve/types";
 import { pratt4, trapezoid, triangle } from "./sections-trusses";
-
-function thrown(fn: () => unknown): SolveError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof SolveError) return e;
-    throw e;
-  }
-  throw new Error("expected a SolveError");
-}
+import { thrown } from "../support/solve-assertions";
 
 describe("jointEquilibrium", () => {
   it("writes ΣFx and ΣFy with the unknowns assumed in tension and the reaction carried in", () => {

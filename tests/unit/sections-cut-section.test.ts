@@ -1,21 +1,11 @@
 import katex from "katex";
 import { describe, expect, it } from "vitest";
-import { SolveError } from "@/lib/solve/errors";
 import { cutSection } from "@/lib/solve/sections";
 import type { TrussModel } from "@/lib/solve/types";
 import { pratt4, prattWithCounter, trapezoid, triangle } from "./sections-trusses";
+import { thrown } from "../support/solve-assertions";
 
 const panel2 = { loadCase: "D", members: ["U1U2", "U1L2", "L1L2"], keep: "L0" };
-
-function thrown(fn: () => unknown): SolveError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof SolveError) return e;
-    throw e;
-  }
-  throw new Error("expected a SolveError");
-}
 
 describe("cutSection", () => {
   it("keeps the side that contains the `keep` joint", () => {

@@ -1,17 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { SolveError } from "@/lib/solve/errors";
 import { cutSection, proposeCuts } from "@/lib/solve/sections";
 import { pratt, pratt4, trapezoid } from "./sections-trusses";
-
-function thrown(fn: () => unknown): SolveError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof SolveError) return e;
-    throw e;
-  }
-  throw new Error("expected a SolveError");
-}
+import { thrown } from "../support/solve-assertions";
 
 describe("proposeCuts", () => {
   it("proposes the straight section through a panel: top chord, diagonal, bottom chord", () => {
