@@ -5,9 +5,12 @@ import { useRef, useState, type ReactNode } from "react";
 import { MathVisibility } from "@/components/math/math-visibility";
 import { useNearScreen } from "./use-near-screen";
 import type { CalcResult } from "@/lib/calcs/calc-types";
+import { CalcCheckBar } from "@/components/review/calc-check-bar";
 import { calcKindName } from "./calc-kind-name";
 
 export type CalcFrameProps = {
+  /** The calc's id: what remarks and check marks are attached to. */
+  calcId: string;
   kind: keyof typeof calcKindName;
   label: string;
   result: CalcResult | undefined;
@@ -20,7 +23,7 @@ export type CalcFrameProps = {
 };
 
 /** The frame every calc shares: label, kind, state in words, problems, and its body. */
-export function CalcFrame({ kind, label, result, editable, selected, onRename, summary, children }: CalcFrameProps) {
+export function CalcFrame({ calcId, kind, label, result, editable, selected, onRename, summary, children }: CalcFrameProps) {
   const [draft, setDraft] = useState(label);
   const status = result?.status ?? "ok";
   const ref = useRef<HTMLDivElement>(null);
@@ -30,6 +33,7 @@ export function CalcFrame({ kind, label, result, editable, selected, onRename, s
       ref={ref}
       className={`pp-calc not-prose my-4 rounded-sm border bg-paper-raised ${selected ? "border-verdigris" : "border-rule-strong"}`}
       data-calc-label={label}
+      data-calc-id={calcId}
       data-calc-status={status}
       contentEditable={false}
     >
@@ -50,6 +54,7 @@ export function CalcFrame({ kind, label, result, editable, selected, onRename, s
           {status === "ok" ? "✓ computed" : status === "blocked" ? "◌ waiting on an input calc" : "✕ has a problem"}
         </span>
       </header>
+      <CalcCheckBar calcId={calcId} label={label} />
       {result && result.messages.length > 0 && (
         <ul className="border-b border-caution bg-caution-light px-3 py-1.5 text-sm text-caution" role="alert">
           {result.messages.map((m) => (

@@ -5,6 +5,7 @@ import { CalcCommands } from "./calc-commands";
 import { calcViews } from "./calc-views";
 import { FigureView } from "./nodes/figure/figure-view";
 import { figureNode } from "./nodes/figure/figure";
+import { RemarkHighlights } from "./remark-highlights";
 import { baseExtensions, calcNodes } from "./schema-extensions";
 
 /** The browser's extension list: the shared schema plus React views, commands and the placeholder. */
@@ -14,5 +15,5 @@ export function editorExtensions({ packageId }: { packageId: string }) {
   });
   // The figure view uploads to this package's store; the schema node stays React-free for the server.
   const figure = figureNode.extend({ addOptions: () => ({ packageId }), addNodeView: () => ReactNodeViewRenderer(FigureView) });
-  return [...baseExtensions().filter((e) => e.name !== "figure"), figure, ...calcs, CalcCommands, Placeholder.configure({ placeholder: "Write the narrative, or type /truss, /cut, /formula … to insert a calc." })];
+  return [...baseExtensions().filter((e) => e.name !== "figure"), figure, ...calcs, CalcCommands, RemarkHighlights, Placeholder.configure({ placeholder: "Write the narrative, or type /truss, /cut, /formula … to insert a calc." })];
 }

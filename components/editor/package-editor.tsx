@@ -3,6 +3,10 @@
 import type { JSONContent } from "@tiptap/core";
 import { EditorContent, useEditor } from "@tiptap/react";
 import { useEffect, useMemo, useState } from "react";
+import { ReviewProvider } from "@/components/review/review-context";
+import { ReviewPanel } from "@/components/review/review-panel";
+import type { CheckerChoice, ReviewAbilities } from "@/components/review/review-types";
+import { useReviewController } from "@/components/review/use-review-controller";
 import { SafetyNotice } from "@/components/shell/safety-notice";
 import { CalcProvider, CalcStore } from "./calc-context";
 import { ConflictBanner } from "./conflict-banner";
@@ -19,10 +23,11 @@ export type PackageEditorProps = {
   initialVersion: number;
   canEdit: boolean;
   unitSystem: "SI" | "US";
+  review: { status: string; assignedChecker: string | null; checkers: CheckerChoice[]; abilities: ReviewAbilities };
 };
 
 /** The package: narrative and live calcs in one document, recomputed in the browser, autosaved with its version. */
-export function PackageEditor({ packageId, initialDocument, initialVersion, canEdit, unitSystem }: PackageEditorProps) {
+export function PackageEditor({ packageId, initialDocument, initialVersion, canEdit, unitSystem, review }: PackageEditorProps) {
   const { evaluation, recompute } = useCalcEvaluation(initialDocument);
   const [doc, setDoc] = useState<JSONContent>(initialDocument);
   const autosave = useAutosave({ packageId, initialVersion, canEdit, initialDocument });
@@ -51,6 +56,18 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
     }
   }, [editor, autosave.restored, recompute]);
 
+  // Submitting, issuing and opening the next revision change what may be edited without a new editor.
+  useEffect(() => {
+    if (editor && !editor.isDestroyed && editor.isEditable !== canEdit) editor.setEditable(canEdit);
+  }, [editor, canEdit]);
+
+  const reviewController = useReviewController({ editor, packageId, status: review.status, abilities: review.abilities, lastSavedAt: autosave.lastSavedAt });
+  const calcLabels = useMemo(() => {
+    const labels = new Map<string, string>();
+    for (const block of doc.content ?? []) if (block.attrs?.id && block.attrs?.label) labels.set(String(block.attrs.id), String(block.attrs.label));
+    return labels;
+  }, [doc]);
+
   // The store is created once; node views subscribe to the results they show.
   const [store] = useState(() => new CalcStore(evaluation));
   useEffect(() => store.set(evaluation), [store, evaluation]);
@@ -61,7 +78,7 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
   };
 
   return (
-    <div className="grid grid-cols-[14rem_1fr] gap-6">
+    <div className="grid grid-cols-[11rem_minmax(0,1fr)_18rem] gap-4">
       <aside className="sticky top-4 self-start">
         <DocumentOutline
           doc={doc}
@@ -95,13 +112,27 @@ export function PackageEditor({ packageId, initialDocument, initialVersion, canE
         )}
         <div className="pp-panel">
           {editor && canEdit && <EditorToolbar editor={editor} />}
-          <CalcProvider value={calcContext}>
-            <div className="px-8 py-6">
-              <EditorContent editor={editor} />
-            </div>
-          </CalcProvider>
+          <ReviewProvider value={reviewController.context}>
+            <CalcProvider value={calcContext}>
+              <div className="px-6 py-6">
+                <EditorContent editor={editor} />
+              </div>
+            </CalcProvider>
+          </ReviewProvider>
         </div>
       </div>
+      <aside className="sticky top-4 max-h-[calc(100vh-2rem)] self-start overflow-y-auto">
+        <ReviewPanel
+          editor={editor}
+          packageId={packageId}
+          status={review.status}
+          assignedChecker={review.assignedChecker}
+          checkers={review.checkers}
+          abilities={review.abilities}
+          calcLabels={calcLabels}
+          controller={reviewController}
+        />
+      </aside>
     </div>
   );
 }

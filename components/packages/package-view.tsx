@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { toast } from "sonner";
 import type { JSONContent } from "@tiptap/core";
-import { PackageEditor } from "@/components/editor/package-editor";
+import { PackageEditor, type PackageEditorProps } from "@/components/editor/package-editor";
 import { fetchJson } from "@/lib/client/fetch-json";
 import { StatusTag } from "./status-tag";
 
@@ -14,9 +14,10 @@ export type PackageViewProps = {
   unitSystem: "SI" | "US";
   canEdit: boolean;
   canDelete: boolean;
+  review: PackageEditorProps["review"];
 };
 
-export function PackageView({ projectId, pkg, canEdit, canDelete, unitSystem }: PackageViewProps) {
+export function PackageView({ projectId, pkg, canEdit, canDelete, unitSystem, review }: PackageViewProps) {
   const router = useRouter();
   const [title, setTitle] = useState(pkg.title);
   const [renaming, setRenaming] = useState(false);
@@ -66,7 +67,7 @@ export function PackageView({ projectId, pkg, canEdit, canDelete, unitSystem }: 
           )}
         </div>
       </header>
-      <PackageEditor packageId={pkg.id} initialDocument={pkg.document as JSONContent} initialVersion={pkg.version} canEdit={canEdit && pkg.status !== "issued"} unitSystem={unitSystem} />
+      <PackageEditor packageId={pkg.id} initialDocument={pkg.document as JSONContent} initialVersion={pkg.version} canEdit={canEdit && pkg.status !== "issued"} unitSystem={unitSystem} review={review} />
     </article>
   );
 }

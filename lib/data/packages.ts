@@ -3,10 +3,10 @@ import type { ActingUser } from "./users";
 
 export type PackageStatus = "draft" | "in_check" | "checked" | "issued";
 
-export type PackageSummary = { id: string; projectId: string; title: string; version: number; status: PackageStatus; createdAt: Date; updatedAt: Date };
+export type PackageSummary = { id: string; projectId: string; title: string; version: number; status: PackageStatus; assignedChecker: string | null; createdAt: Date; updatedAt: Date };
 export type PackageWithDocument = PackageSummary & { document: unknown };
 
-const summaryColumns = ["k.id", "k.projectId", "k.title", "k.version", "k.status", "k.createdAt", "k.updatedAt"];
+const summaryColumns = ["k.id", "k.projectId", "k.title", "k.version", "k.status", "k.assignedChecker", "k.createdAt", "k.updatedAt"];
 
 export async function listPackages(projectId: string, trx: DbOrTrx = db()): Promise<PackageSummary[]> {
   return trx.from("packages as k").select(...summaryColumns).where("k.projectId", projectId).orderBy("k.updatedAt", "desc");

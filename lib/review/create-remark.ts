@@ -1,5 +1,6 @@
 import type { Trx } from "@/db/knex";
 import { AppError } from "@/lib/app-error";
+import { notifyAfterCommit } from "@/lib/notifications/notify-review";
 import { extractCalcs } from "@/lib/calcs/extract-calcs";
 import { recordAudit } from "@/lib/data/audit";
 import type { ActingUser } from "@/lib/data/users";
@@ -37,6 +38,7 @@ export async function createRemark({ actor, packageId, text, calcId = null, anch
       .returning("id");
     await recordAudit({ firmId: actor.firmId, actorId: actor.id, action: "remark.create", entityType: "remark", entityId: row.id, projectId: pkg.projectId, data: { packageId: pkg.id, calcId } }, t);
     await settlePackageState({ actor, pkg, trx: t });
+    notifyAfterCommit(t, { kind: "remark.raised", packageId: pkg.id, remarkId: row.id as string, actorId: actor.id });
     return { id: row.id as string };
   });
 }

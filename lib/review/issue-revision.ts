@@ -1,5 +1,6 @@
 import type { Trx } from "@/db/knex";
 import { AppError } from "@/lib/app-error";
+import { notifyAfterCommit } from "@/lib/notifications/notify-review";
 import { evaluateCalcs } from "@/lib/calcs/evaluate-calcs";
 import { extractCalcs } from "@/lib/calcs/extract-calcs";
 import { recordAudit } from "@/lib/data/audit";
@@ -46,6 +47,7 @@ export async function issueRevision({ actor, packageId, trx }: IssueRevisionOpti
       { firmId: actor.firmId, actorId: actor.id, action: "revision.issue", entityType: "revision", entityId: row.id, projectId: pkg.projectId, data: { packageId: pkg.id, number, label, fingerprint } },
       t,
     );
+    notifyAfterCommit(t, { kind: "issued", packageId: pkg.id, revisionId: row.id as string, actorId: actor.id });
     return { id: row.id as string, number, label, fingerprint, issuedAt: row.issuedAt as Date };
   });
 }

@@ -2,6 +2,7 @@ import type { Trx } from "@/db/knex";
 import { extractCalcs } from "@/lib/calcs/extract-calcs";
 import type { ActingUser } from "@/lib/data/users";
 import type { RemarkAnchor } from "./create-remark";
+import { quoteInDocument } from "./find-quote";
 import { loadReviewPackage } from "./load-review-package";
 import { withTransaction } from "./with-transaction";
 
@@ -17,7 +18,7 @@ export type RemarkThread = {
   openerName: string;
   createdAt: Date;
   closedAt: Date | null;
-  /** The calc it was on is no longer in the document: kept and shown as detached, never lost. */
+  /** The calc it was on, or the words it quoted, are no longer in the document: kept and shown as detached, never lost. */
   detached: boolean;
   replies: RemarkReply[];
 };
@@ -51,7 +52,7 @@ export async function listRemarks({ actor, packageId, trx }: ListRemarksOptions)
       threads.set(p.remarkId, thread);
     }
     return remarks
-      .map((r) => ({ ...r, detached: r.calcId !== null && !calcIds.has(r.calcId), replies: threads.get(r.id) ?? [] }))
+      .map((r) => ({ ...r, detached: (r.calcId !== null && !calcIds.has(r.calcId)) || (r.anchor !== null && !quoteInDocument(pkg.document, r.anchor.quote)), replies: threads.get(r.id) ?? [] }))
       .sort((a, b) => stateOrder[a.state] - stateOrder[b.state]);
   });
 }

@@ -1,6 +1,7 @@
 import type { Trx } from "@/db/knex";
 import { can } from "@/lib/access/permissions";
 import { AppError } from "@/lib/app-error";
+import { notifyAfterCommit } from "@/lib/notifications/notify-review";
 import { recordAudit } from "@/lib/data/audit";
 import { isUuid } from "@/lib/data/projects";
 import type { ActingUser } from "@/lib/data/users";
@@ -34,6 +35,7 @@ export async function replyToRemark({ actor, packageId, remarkId, text, trx }: R
       { firmId: actor.firmId, actorId: actor.id, action: "remark.reply", entityType: "remark", entityId: remark.id, projectId: pkg.projectId, data: { packageId: pkg.id, from: remark.state, to: state } },
       t,
     );
+    if (state === "answered" && remark.state === "open") notifyAfterCommit(t, { kind: "remark.answered", packageId: pkg.id, remarkId: remark.id, actorId: actor.id });
     return { id: row.id as string, state };
   });
 }

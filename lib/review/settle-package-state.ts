@@ -1,5 +1,6 @@
 import type { Trx } from "@/db/knex";
 import { recordAudit } from "@/lib/data/audit";
+import { notifyAfterCommit } from "@/lib/notifications/notify-review";
 import type { PackageStatus } from "@/lib/data/packages";
 import type { ActingUser } from "@/lib/data/users";
 import { computeCheckProgress } from "./compute-check-progress";
@@ -24,5 +25,6 @@ export async function settlePackageState({ actor, pkg, trx }: SettlePackageState
     { firmId: actor.firmId, actorId: actor.id, action: `package.${next}`, entityType: "package", entityId: pkg.id, projectId: pkg.projectId, data: { from: pkg.status, checked: progress.checked, total: progress.total, openRemarks: progress.openRemarks } },
     trx,
   );
+  if (next === "checked") notifyAfterCommit(trx, { kind: "checked", packageId: pkg.id, actorId: actor.id });
   return next;
 }

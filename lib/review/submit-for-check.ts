@@ -1,5 +1,6 @@
 import type { Trx } from "@/db/knex";
 import { AppError } from "@/lib/app-error";
+import { notifyAfterCommit } from "@/lib/notifications/notify-review";
 import { recordAudit } from "@/lib/data/audit";
 import type { ActingUser } from "@/lib/data/users";
 import { loadReviewPackage } from "./load-review-package";
@@ -13,7 +14,7 @@ const whyNot: Record<string, string> = {
   issued: "This package is issued; start the next revision to change and resubmit it.",
 };
 
-/** Draft → in check. Needs an assigned checker, who is the one told (the notification is the caller's job). */
+/** Draft → in check. Needs an assigned checker, who is told by e-mail once this commits. */
 export async function submitForCheck({ actor, packageId, trx }: SubmitForCheckOptions): Promise<{ status: "in_check"; assignedChecker: string }> {
   return withTransaction(trx, async (t) => {
     const { pkg } = await loadReviewPackage({ actor, packageId, permission: "package.submit", refusal: "Only an engineer or the project engineer submits a package for check.", trx: t });
@@ -21,6 +22,7 @@ export async function submitForCheck({ actor, packageId, trx }: SubmitForCheckOp
     if (!pkg.assignedChecker) throw new AppError("CONFLICT", "No checker is assigned to this package; the project engineer must assign one before it can be submitted for check.");
     await t.from("packages").where({ id: pkg.id }).update({ status: "in_check", updatedAt: t.fn.now() });
     await recordAudit({ firmId: actor.firmId, actorId: actor.id, action: "package.submit", entityType: "package", entityId: pkg.id, projectId: pkg.projectId, data: { checkerId: pkg.assignedChecker } }, t);
+    notifyAfterCommit(t, { kind: "submitted", packageId: pkg.id, actorId: actor.id });
     return { status: "in_check", assignedChecker: pkg.assignedChecker };
   });
 }

@@ -126,23 +126,21 @@ describe("evaluateCalcs", () => {
     expect(Object.keys(evaluateCalcs({ calcs }).results)).toEqual(calcs.map((c) => c.id));
   });
 
-  it("recomputes 50 calcs after one change well within 10 ms", () => {
+  // The time this takes is measured by `npm run bench:editor`, not here: this test pins the property that makes it fast.
+  it("recomputes only the changed calc out of 50, keeping every other result from the previous pass", () => {
     const calcs: CalcNode[] = [
       ...demoCalcs(),
       ...Array.from({ length: 43 }, (_, i) => seedCalc("formula", { source: `a = ${i} kN\nb = a * 2\nc = T1.F_U2U3_G + b` }, `F${i + 10}`)),
     ];
     let previous = evaluateCalcs({ calcs: structuredClone(calcs) });
-    const times: number[] = [];
-    for (let k = 0; k < 15; k++) {
+    for (let k = 0; k < 3; k++) {
       // A fresh copy each time, as the editor hands over a new document on every keystroke.
       const next = structuredClone(calcs);
       next[20].inputs = { source: `a = ${k} kN\nb = a * 2\nc = T1.F_U2U3_G + b` };
-      const started = performance.now();
+      const before = previous;
       previous = evaluateCalcs({ calcs: next, previous, changed: [next[20].id] });
-      times.push(performance.now() - started);
+      expect(previous.recomputed).toEqual([calcs[20].id]);
+      for (const c of calcs) if (c.id !== calcs[20].id) expect(previous.results[c.id]).toBe(before.results[c.id]);
     }
-    times.sort((x, y) => x - y);
-    expect(previous.recomputed).toEqual([calcs[20].id]);
-    expect(times[7]).toBeLessThan(10);
   });
 });

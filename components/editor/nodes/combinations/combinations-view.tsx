@@ -49,7 +49,7 @@ export function CombinationsView(props: NodeViewProps) {
   };
 
   return (
-    <CalcFrame kind="combinations" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={view ? combinationsSummary(view, setName) : undefined}>
+    <CalcFrame calcId={calc.id} kind="combinations" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={view ? combinationsSummary(view, setName) : undefined}>
       <div className="grid gap-3 sm:grid-cols-[10rem_1fr]">
         <SelectField label="Truss calc" value={inputs.truss} options={trussOptions(choices, inputs.truss)} onChange={(t) => calc.setInputs({ ...inputs, truss: t })} readOnly={readOnly} error={fieldErrorAt(errors, "truss")} />
         <SelectField

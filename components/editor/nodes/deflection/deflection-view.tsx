@@ -32,7 +32,7 @@ export function DeflectionView(props: NodeViewProps) {
   const summary = view ? `δ = ${formatQuantity(view.value, view.units.deflection)} ${view.sense}; allowable ${formatQuantity(view.allowable, view.units.deflection)}: ${view.pass ? "PASS ✓" : "FAIL ✕"}` : undefined;
 
   return (
-    <CalcFrame kind="deflection" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={summary}>
+    <CalcFrame calcId={calc.id} kind="deflection" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={summary}>
       <DeflectionControls inputs={inputs} truss={truss} trussOptions={trussOptions(choices, inputs.truss)} errors={errors} readOnly={!calc.editable} onChange={calc.setInputs} />
       <FieldErrorList errors={errors} shownOnField={(p) => OWN_FIELDS.has(p)} />
       {view && <DeflectionCheck view={view} />}

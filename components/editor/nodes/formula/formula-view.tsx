@@ -32,6 +32,7 @@ export function FormulaView(props: NodeViewProps) {
 
   return (
     <CalcFrame
+      calcId={calc.id}
       kind="formula"
       label={calc.label}
       result={calc.result}

@@ -14,7 +14,7 @@ export function JointView(props: NodeViewProps) {
   const sources = useTrussSources();
   const view = calc.result?.status === "ok" ? (calc.result.view as JointViewData) : null;
   return (
-    <CalcFrame kind="joint" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={jointSummary(view)}>
+    <CalcFrame calcId={calc.id} kind="joint" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={jointSummary(view)}>
       <JointBody label={calc.label} inputs={calc.inputs} result={calc.result} sources={sources} editable={calc.editable} setInputs={calc.setInputs} />
     </CalcFrame>
   );

@@ -37,6 +37,7 @@ export function MemberDesignView(props: NodeViewProps) {
 
   return (
     <CalcFrame
+      calcId={calc.id}
       kind="memberDesign"
       label={calc.label}
       result={calc.result}

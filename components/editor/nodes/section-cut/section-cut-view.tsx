@@ -14,7 +14,7 @@ export function SectionCutView(props: NodeViewProps) {
   const sources = useTrussSources();
   const view = calc.result?.status === "ok" ? (calc.result.view as SectionCutViewData) : null;
   return (
-    <CalcFrame kind="sectionCut" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={sectionCutSummary(view)}>
+    <CalcFrame calcId={calc.id} kind="sectionCut" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={sectionCutSummary(view)}>
       <SectionCutBody label={calc.label} inputs={calc.inputs} result={calc.result} sources={sources} editable={calc.editable} setInputs={calc.setInputs} />
     </CalcFrame>
   );

@@ -14,7 +14,7 @@ export function TrussView(props: NodeViewProps) {
   const { unitSystem } = useCalcContext();
   const summary = calc.result ? trussSummary((calc.result.view ?? null) as TrussViewData | null) : undefined;
   return (
-    <CalcFrame kind="truss" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={summary}>
+    <CalcFrame calcId={calc.id} kind="truss" label={calc.label} result={calc.result} editable={calc.editable} selected={props.selected} onRename={calc.rename} summary={summary}>
       <TrussBody label={calc.label} inputs={calc.inputs} result={calc.result} editable={calc.editable} packageSystem={unitSystem} setInputs={calc.setInputs} />
     </CalcFrame>
   );

@@ -3,20 +3,40 @@ import { PackageView } from "@/components/packages/package-view";
 import { can } from "@/lib/access/permissions";
 import { loadProjectPage } from "@/lib/access/load-project-page";
 import { findPackage } from "@/lib/data/packages";
+import { listProjectMembers } from "@/lib/data/project-members";
 import { isUuid } from "@/lib/data/projects";
 
 export default async function PackagePage({ params }: { params: Promise<{ projectId: string; packageId: string }> }) {
   const { projectId, packageId } = await params;
-  const { access } = await loadProjectPage(projectId, "package.read");
+  const { user, access } = await loadProjectPage(projectId, "package.read");
   const pkg = isUuid(packageId) ? await findPackage(projectId, packageId, { withDocument: true }) : undefined;
   if (!pkg) notFound();
+  const members = await listProjectMembers(projectId);
+  const g = access.grantees;
   return (
     <PackageView
       projectId={projectId}
       pkg={{ id: pkg.id, title: pkg.title, status: pkg.status, version: pkg.version, updatedAt: String(pkg.updatedAt), document: pkg.document }}
       unitSystem={access.project.unitSystem}
-      canEdit={can("package.edit", access.grantees)}
-      canDelete={can("package.delete", access.grantees)}
+      canEdit={can("package.edit", g)}
+      canDelete={can("package.delete", g)}
+      review={{
+        status: pkg.status,
+        assignedChecker: pkg.assignedChecker,
+        checkers: members.filter((m) => m.role === "checker" && !m.disabled).map((m) => ({ userId: m.userId, name: m.name })),
+        abilities: {
+          userId: user.id,
+          canRemark: can("remark.create", g),
+          canReply: can("remark.reply", g),
+          canCloseAny: access.role === "project_engineer",
+          canCloseOwn: can("remark.close", g),
+          canCheck: can("calc.check", g) && pkg.assignedChecker === user.id,
+          canSubmit: can("package.submit", g),
+          canAssign: can("checker.assign", g),
+          canIssue: can("revision.issue", g),
+          canStartNext: can("package.edit", g),
+        },
+      }}
     />
   );
 }
