@@ -6,6 +6,7 @@ import { toast } from "sonner";
 import type { JSONContent } from "@tiptap/core";
 import { PackageEditor, type PackageEditorProps } from "@/components/editor/package-editor";
 import { fetchJson } from "@/lib/client/fetch-json";
+import { PackageLinks } from "./package-links";
 import { StatusTag } from "./status-tag";
 
 export type PackageViewProps = {
@@ -67,6 +68,7 @@ export function PackageView({ projectId, pkg, canEdit, canDelete, unitSystem, re
           )}
         </div>
       </header>
+      <PackageLinks projectId={projectId} packageId={pkg.id} />
       <PackageEditor packageId={pkg.id} initialDocument={pkg.document as JSONContent} initialVersion={pkg.version} canEdit={canEdit && pkg.status !== "issued"} unitSystem={unitSystem} review={review} />
     </article>
   );
