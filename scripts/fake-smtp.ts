@@ -9,7 +9,7 @@ import type { CapturedMail } from "../lib/mail/list-captured-mail";
 /**
  * Local stand-in for a mail provider: accepts every message on 127.0.0.1, keeps it in memory and
  * in a JSON-lines file (a restart keeps the inbox), and lists it over a small HTTP API for the
- * development mail page and the tests. Never exposed beyond loopback, so no auth and no TLS.
+ * development mail page and the tests. Greylists addresses that start with greylist- once. Never exposed beyond loopback, so no auth and no TLS.
  */
 export type FakeSmtpOptions = { host: string; smtpPort: number; apiPort: number; directory: string };
 export type RunningService = { close: () => Promise<void> };
@@ -18,6 +18,7 @@ const MAX_MESSAGE_BYTES = 25 * 1024 * 1024;
 
 export async function startFakeSmtp(options: FakeSmtpOptions): Promise<RunningService> {
   const store = await openStore(path.join(options.directory, "messages.jsonl"));
+  const greylisted = new Set<string>();
   const smtp = new SMTPServer({
     banner: "Panelpoint fake SMTP",
     authOptional: true,
@@ -27,6 +28,16 @@ export async function startFakeSmtp(options: FakeSmtpOptions): Promise<RunningSe
     disabledCommands: ["STARTTLS"],
     size: MAX_MESSAGE_BYTES,
     logger: false,
+    // Greylisting, as many real servers do: the first attempt for a greylist-… address is refused
+    // with a temporary 451, so the tests can watch the mail queue retry a transient failure.
+    onRcptTo: (address, _session, callback) => {
+      const to = address.address.toLowerCase();
+      if (to.startsWith("greylist-") && !greylisted.has(to)) {
+        greylisted.add(to);
+        return callback(Object.assign(new Error("Greylisted: please try again later"), { responseCode: 451 }));
+      }
+      callback();
+    },
     onData: (stream, session, callback) => {
       // Answer 250 only once stored, so a resolved sendMail() is already listed.
       simpleParser(stream)
