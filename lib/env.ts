@@ -27,6 +27,11 @@ const schema = z.object({
   S3_FORCE_PATH_STYLE: z.stringbool().default(true),
   SIGNIN_MAX_FAILURES: z.coerce.number().int().positive().default(5),
   SIGNIN_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
+  /** The firm's PDF signing certificate (PKCS#12); scripts/make-dev-cert.ts makes a self-signed one for development. */
+  SIGNING_P12_PATH: z.string().min(1).default(".data/certs/dev-signing.p12"),
+  SIGNING_P12_PASSPHRASE: z.string().default("panelpoint-dev-signing"),
+  /** Keys the HMAC of short-lived export download links; derived from NEXTAUTH_SECRET when unset. */
+  EXPORT_LINK_SECRET: z.string().min(16).optional(),
 });
 
 export type Env = z.infer<typeof schema>;

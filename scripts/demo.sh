@@ -40,6 +40,7 @@ pp_run bash scripts/ensure-system.sh postgresql chromium poppler-utils
 pp_start_pg demo
 pp_start_fakes demo
 pp_run npm run --silent db:migrate
+pp_make_dev_cert
 # Assigned first so that a failing check stops the demo instead of silently skipping the seed.
 firms="$(node_modules/.bin/tsx scripts/has-seed.ts)"
 if [[ "$firms" == 0 ]]; then

@@ -99,6 +99,12 @@ pp_start_app() {
   fi
 }
 
+# The PDF signing certificate: a self-signed development one (scripts/make-dev-cert.ts) when
+# SIGNING_P12_PATH names no file yet; the script says which it did.
+pp_make_dev_cert() {
+  pp_run "$PP_ROOT/node_modules/.bin/tsx" "$PP_ROOT/scripts/make-dev-cert.ts"
+}
+
 # PostgreSQL is stopped at the end only by the run that started it. The marker file survives a
 # kill -9 of that run, so the next run knows the still-running server is its own to stop.
 pp_pg_marker() { printf '%s\n' "$PP_ROOT/.run/$1-pg.started"; }

@@ -18,6 +18,8 @@ export PP_PG_PORT=54339 PP_PG_DATA=.data/pg-test PP_DB_NAME=panelpoint_test PP_D
 export PP_SMTP_PORT=2526 PP_MAIL_API_PORT=8026 PP_MAIL_DIR=.data/mail-test
 export PP_S3_PORT=4570 PP_S3_DIR=.data/s3-test
 export APP_ENV=test
+# The e2e suite walks the footbridge package from draft to Rev 0 itself, so it seeds the scenario without its history.
+export PP_SEED_HISTORY=0
 pp_export_app_env
 export E2E_BASE_URL="$APP_URL"
 
@@ -101,6 +103,7 @@ rm -rf "$PP_MAIL_DIR" "$PP_S3_DIR"
 pp_start_pg test
 pp_start_fakes test
 pp_run npm run --silent db:migrate
+pp_make_dev_cert
 
 run_suite "unit+reference" unit --project unit --project reference
 run_suite "integration" integration --project integration

@@ -1,8 +1,9 @@
-// `npm run worker`: works the job queues (review e-mail now; exports later). Several workers may
+// `npm run worker`: works the job queues (review e-mail, export rendering). Several workers may
 // run on several machines against the same database; each job is worked once.
 import { closeDb } from "@/db/knex";
 import { stopBoss } from "@/lib/jobs/boss";
 import { workQueues } from "@/lib/jobs/work-queues";
+import { closeBrowser } from "@/lib/report/pdf/browser";
 
 const names = await workQueues();
 console.log(`worker: working ${names.join(", ")}`);
@@ -13,6 +14,8 @@ async function stop(signal: string) {
   stopping = true;
   console.log(`worker: ${signal}, finishing the jobs in hand`);
   await stopBoss();
+  // Chromium is a child of this process; leave none behind.
+  await closeBrowser().catch(() => undefined);
   await closeDb();
   process.exit(0);
 }

@@ -1,15 +1,7 @@
 import type { JSONContent } from "@tiptap/core";
+import { headingNumbers as numberHeadings } from "@/lib/document/heading-numbers";
 
-/** Automatic heading numbers (1, 1.1, 1.1.1 …) by position of top-level heading nodes. */
+/** Automatic heading numbers (1, 1.1, 1.1.1 …) by position of top-level heading nodes; the logic lives in lib/document so the exports number alike. */
 export function headingNumbers(doc: JSONContent): Map<number, string> {
-  const counters = [0, 0, 0, 0];
-  const out = new Map<number, string>();
-  (doc.content ?? []).forEach((node, index) => {
-    if (node.type !== "heading") return;
-    const level = Math.min(4, Math.max(1, Number(node.attrs?.level ?? 1)));
-    counters[level - 1] += 1;
-    for (let i = level; i < counters.length; i++) counters[i] = 0;
-    out.set(index, counters.slice(0, level).map((n) => Math.max(n, 1)).join("."));
-  });
-  return out;
+  return numberHeadings(doc);
 }

@@ -5,6 +5,7 @@ import { useState } from "react";
 import { toast } from "sonner";
 import type { JSONContent } from "@tiptap/core";
 import { PackageEditor, type PackageEditorProps } from "@/components/editor/package-editor";
+import { ExportPanel, type ExportPanelProps } from "@/components/exports/export-panel";
 import { fetchJson } from "@/lib/client/fetch-json";
 import { PackageLinks } from "./package-links";
 import { StatusTag } from "./status-tag";
@@ -16,9 +17,10 @@ export type PackageViewProps = {
   canEdit: boolean;
   canDelete: boolean;
   review: PackageEditorProps["review"];
+  exports?: Omit<ExportPanelProps, "packageId">;
 };
 
-export function PackageView({ projectId, pkg, canEdit, canDelete, unitSystem, review }: PackageViewProps) {
+export function PackageView({ projectId, pkg, canEdit, canDelete, unitSystem, review, exports }: PackageViewProps) {
   const router = useRouter();
   const [title, setTitle] = useState(pkg.title);
   const [renaming, setRenaming] = useState(false);
@@ -69,6 +71,7 @@ export function PackageView({ projectId, pkg, canEdit, canDelete, unitSystem, re
         </div>
       </header>
       <PackageLinks projectId={projectId} packageId={pkg.id} />
+      {exports && <ExportPanel packageId={pkg.id} {...exports} />}
       <PackageEditor packageId={pkg.id} initialDocument={pkg.document as JSONContent} initialVersion={pkg.version} canEdit={canEdit && pkg.status !== "issued"} unitSystem={unitSystem} review={review} />
     </article>
   );

@@ -1,6 +1,9 @@
 import type { Knex } from "knex";
 import { hashPassword } from "../../lib/auth/password";
 import { demoFootbridgeDocument } from "../../lib/document/demo-footbridge-document";
+import { saveSealProfile } from "../../lib/seals/save-seal-profile";
+import { uploadSealImage } from "../../lib/seals/upload-seal-image";
+import { demoSealProfile, demoSealSvg } from "../demo/demo-seal";
 import { DEMO_PASSWORD, demoFirm, demoPeople, demoProjects, otherFirm } from "../demo/people";
 
 /** Builds the invented demo scenario. Run once on an empty database (`npm run demo` checks first). */
@@ -14,6 +17,10 @@ export async function seed(knex: Knex): Promise<void> {
       await trx.insert({ firmId: firm.id, userId: u.id, role: p.firmRole }).into("firmMemberships");
       ids[p.key] = u.id;
     }
+    // The engineer of record's seal, so the demo can issue: the image goes to the file store (the fake S3 runs before the seed).
+    const pe = { id: ids.projectEngineer, firmId: firm.id as string };
+    await saveSealProfile({ actor: pe, input: demoSealProfile, trx });
+    await uploadSealImage({ actor: pe, bytes: Buffer.from(demoSealSvg, "utf8"), trx });
     for (const pr of demoProjects) {
       const [project] = await trx
         .insert({ firmId: firm.id, name: pr.name, jobNumber: pr.jobNumber, client: pr.client, site: pr.site, unitSystem: pr.unitSystem, paperSize: pr.paperSize, designCodes: JSON.stringify(pr.designCodes) })

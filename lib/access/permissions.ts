@@ -28,11 +28,21 @@ export const permissions = {
   "calc.check": ["checker"],
   "checker.assign": ["project_engineer"],
   "revision.issue": ["project_engineer"],
-  "export.create": ["engineer", "checker", "project_engineer"],
+  // Plan-review comments: the engineer of record records and answers them; every project member reads them.
+  "planReview.read": ["engineer", "checker", "project_engineer", "viewer", "firm_admin"],
+  "planReview.manage": ["project_engineer"],
+  // Every project member may export and download, viewers included (the permit set goes to whoever needs it).
+  "export.create": ["engineer", "checker", "project_engineer", "viewer", "firm_admin"],
+  "export.read": ["engineer", "checker", "project_engineer", "viewer", "firm_admin"],
+  // A signed link names no project: route() only requires sign-in, and lib/exports/download-export.ts checks export.read on the export's project.
+  "export.download": ["firm_member", "firm_admin"],
   "firm.members.list": ["firm_admin", "firm_member"],
   "firm.members.manage": ["firm_admin"],
   "account.read": ["firm_member", "firm_admin"],
   "account.update": ["firm_member", "firm_admin"],
+  // One's own seal profile: anyone may keep one; issuing asks the project engineer for a valid one.
+  "seal.read": ["firm_member", "firm_admin"],
+  "seal.manage": ["firm_member", "firm_admin"],
 } as const satisfies Record<string, readonly Grantee[]>;
 
 export type Permission = keyof typeof permissions;

@@ -21,6 +21,9 @@ export function describeAuditEntry(action: string, data: Record<string, unknown>
     case "remark.close": return `Closed a remark (was ${s("from")})`;
     case "revision.issue": return `Issued Rev ${s("label")} (fingerprint ${s("fingerprint").slice(0, 12)}…)`;
     case "revision.start_next": return "Started the next revision";
+    case "plan_review.record": return `Recorded plan-review comment${Array.isArray(data.numbers) && data.numbers.length === 1 ? "" : "s"} ${Array.isArray(data.numbers) ? data.numbers.join(", ") : ""} on Rev ${s("revision")}`;
+    case "plan_review.update": return `Updated plan-review comment ${s("number")}`;
+    case "plan_review.delete": return `Removed plan-review comment ${s("number")} on Rev ${s("revision")}`;
     case "figure.upload": return "Uploaded a figure";
     case "export.create": return `Asked for a ${s("format").toUpperCase()} export`;
     case "export.done": return `Export finished (${s("format").toUpperCase()})`;

@@ -1,5 +1,6 @@
 import type { Job } from "pg-boss";
 import { sendMail, type OutgoingMail } from "@/lib/mail/send-mail";
+import { runExport } from "@/lib/exports/run-export";
 import type { ReviewEvent } from "@/lib/notifications/review-event";
 import { resolveReviewMail } from "@/lib/notifications/resolve-review-mail";
 import type { QueueName } from "./queues";
@@ -14,5 +15,8 @@ export const handlers: Record<QueueName, (job: Job<object>) => Promise<void>> = 
   },
   "mail.send": async (job) => {
     await sendMail(job.data as OutgoingMail);
+  },
+  "export.render": async (job) => {
+    await runExport({ exportId: (job.data as { exportId: string }).exportId });
   },
 };

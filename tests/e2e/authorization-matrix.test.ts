@@ -9,6 +9,12 @@ import { seedPackage, seedUser } from "../support/seed";
 import { pngForm, TINY_PNG } from "../support/tiny-png";
 import { figureKey } from "@/lib/figures/figure-key";
 import { putObject } from "@/lib/storage/put-object";
+import { signExportLink } from "@/lib/exports/export-link";
+import { exportObjectKey } from "@/lib/exports/export-object-key";
+import { findSealProfile } from "@/lib/data/seal-profiles";
+import { uploadSealImage } from "@/lib/seals/upload-seal-image";
+import { computeFingerprint } from "@/lib/review/compute-fingerprint";
+import { demoSealProfile, demoSealSvg } from "@/db/demo/demo-seal";
 
 /**
  * Every route handler × every kind of caller → the status each must get.
@@ -36,6 +42,64 @@ async function freshViewer(ids: Ids) {
   return u.id;
 }
 
+/** The demo seal as a multipart upload. */
+function sealForm(): FormData {
+  const form = new FormData();
+  form.set("file", new Blob([demoSealSvg], { type: "image/svg+xml" }), "seal.svg");
+  return form;
+}
+
+/** Every signed-in caller of the matrix gets a seal image (the demo project engineer has one already), so reading one's own can answer 200. */
+async function ensureSealImages(): Promise<void> {
+  for (const email of [demoLogin("engineer").email, demoLogin("checker").email, demoLogin("projectEngineer").email, demoLogin("admin").email, otherFirmLogin.email]) {
+    const u = await db().from("users as u").join("firmMemberships as fm", "fm.userId", "u.id").select("u.id", "fm.firmId").where("u.email", email).first();
+    const profile = await findSealProfile({ userId: u.id, firmId: u.firmId });
+    if (!profile?.imageKey) await uploadSealImage({ actor: { id: u.id, firmId: u.firmId }, bytes: Buffer.from(demoSealSvg, "utf8") });
+  }
+}
+
+/** A draft package after an issued Rev 0 (inserted as issued), optionally with one plan-review comment on Rev 0. */
+async function planReviewDraft(ids: Ids, o: { comment?: boolean } = {}) {
+  const pkg = await seedPackage({ projectId: ids.footbridgeId, status: "draft" });
+  const pe = await db().from("users").select("id").where({ email: demoLogin("projectEngineer").email }).first();
+  const frozen = { document: { type: "doc", content: [] }, results: {}, checkRecord: { calcs: [], remarks: [] }, number: 0 };
+  const [rev] = await db()
+    .insert({ packageId: pkg.id, number: 0, label: "0", document: JSON.stringify(frozen.document), results: "{}", checkRecord: JSON.stringify(frozen.checkRecord), issuedBy: pe.id, issuedAt: new Date(), fingerprint: computeFingerprint(frozen) })
+    .into("revisions")
+    .returning("id");
+  let commentId: string | undefined;
+  if (o.comment) {
+    const [c] = await db()
+      .insert({ firmId: ids.firmId, projectId: ids.footbridgeId, packageId: pkg.id, revisionId: rev.id, number: "1", position: 1, text: "Matrix comment.", createdBy: pe.id })
+      .into("planReviewComments")
+      .returning("id");
+    commentId = c.id;
+  }
+  return { packageId: pkg.id as string, revisionId: rev.id as string, commentId };
+}
+
+/** A finished export of a fresh package on the footbridge, its file in S3; with `issued`, of an issued revision, signed, with a verification token. */
+async function doneExport(ids: Ids, issued = false): Promise<{ id: string; token: string | null }> {
+  const pkg = await seedPackage({ projectId: ids.footbridgeId, status: issued ? "issued" : "draft" });
+  const pe = await db().from("users").select("id").where({ email: demoLogin("projectEngineer").email }).first();
+  let revisionId: string | null = null;
+  if (issued) {
+    const [rev] = await db()
+      .insert({ packageId: pkg.id, number: 0, label: "0", document: JSON.stringify({ type: "doc", content: [] }), results: "{}", checkRecord: JSON.stringify({ calcs: [], remarks: [] }), issuedBy: pe.id, issuedAt: new Date(), fingerprint: "0".repeat(64) })
+      .into("revisions")
+      .returning("id");
+    revisionId = rev.id;
+  }
+  const token = issued ? randomUUID().replace(/-/g, "").slice(0, 24) : null;
+  const [row] = await db()
+    .insert({ firmId: ids.firmId, projectId: ids.footbridgeId, packageId: pkg.id, revisionId, format: "pdf", status: "done", signed: issued, verifyToken: token, requestedBy: pe.id, sha256: "a".repeat(64), byteSize: 4, finishedAt: new Date() })
+    .into("exports")
+    .returning("id");
+  await db().from("exports").where({ id: row.id }).update({ objectKey: exportObjectKey(ids.firmId, row.id, "pdf") });
+  await putObject({ key: exportObjectKey(ids.firmId, row.id, "pdf"), body: Buffer.from("%PDF"), contentType: "application/pdf" });
+  return { id: row.id, token };
+}
+
 const matrix: Row[] = [
   { method: "GET", route: "/api/auth/[...nextauth]", prepare: async () => ({ path: "/api/auth/session" }), expect: all(200) },
   { method: "POST", route: "/api/auth/[...nextauth]", prepare: async () => ({ path: "/api/auth/signout" }), expect: all(302) },
@@ -49,6 +113,19 @@ const matrix: Row[] = [
   },
   { method: "GET", route: "/api/v1/account", prepare: async () => ({ path: "/api/v1/account" }), expect: { ...all(200), anon: 401 } },
   { method: "PATCH", route: "/api/v1/account", prepare: async () => ({ path: "/api/v1/account", body: {} }), expect: { ...all(200), anon: 401 } },
+  { method: "GET", route: "/api/v1/account/seal", prepare: async () => ({ path: "/api/v1/account/seal" }), expect: { ...all(200), anon: 401 } },
+  // Everyone manages only their own seal; the demo's values keep the demo project engineer's seal as it was.
+  { method: "PUT", route: "/api/v1/account/seal", prepare: async () => ({ path: "/api/v1/account/seal", body: demoSealProfile }), expect: { ...all(200), anon: 401 } },
+  { method: "PUT", route: "/api/v1/account/seal/image", prepare: async () => ({ path: "/api/v1/account/seal/image", body: sealForm() }), expect: { ...all(200), anon: 401 } },
+  {
+    method: "GET",
+    route: "/api/v1/account/seal/image",
+    prepare: async () => {
+      await ensureSealImages();
+      return { path: "/api/v1/account/seal/image" };
+    },
+    expect: { ...all(200), anon: 401 },
+  },
   { method: "GET", route: "/api/v1/projects", prepare: async () => ({ path: "/api/v1/projects" }), expect: { ...all(200), anon: 401 } },
   {
     method: "POST",
@@ -204,6 +281,22 @@ const matrix: Row[] = [
     },
     expect: { anon: 401, engineer: 403, checker: 200, pe: 403, admin: 403, other: 404 },
   },
+  {
+    method: "GET",
+    route: "/api/v1/packages/[packageId]/compare",
+    prepare: async (i) => {
+      // A package with one revision (inserted as issued) compared with its draft.
+      const pkg = await seedPackage({ projectId: i.footbridgeId, status: "draft" });
+      const pe = await db().from("users").select("id").where({ email: demoLogin("projectEngineer").email }).first();
+      const frozen = { document: { type: "doc", content: [] }, results: {}, checkRecord: { calcs: [], remarks: [] }, number: 0 };
+      const [rev] = await db()
+        .insert({ packageId: pkg.id, number: 0, label: "0", document: JSON.stringify(frozen.document), results: "{}", checkRecord: JSON.stringify(frozen.checkRecord), issuedBy: pe.id, issuedAt: new Date(), fingerprint: computeFingerprint(frozen) })
+        .into("revisions")
+        .returning("id");
+      return { path: `/api/v1/packages/${pkg.id}/compare?from=${rev.id}&to=draft` };
+    },
+    expect: readers,
+  },
   { method: "GET", route: "/api/v1/packages/[packageId]/revisions", prepare: async (i) => ({ path: `/api/v1/packages/${i.packageId}/revisions` }), expect: readers },
   {
     method: "POST",
@@ -211,6 +304,67 @@ const matrix: Row[] = [
     // A checked package with no calcs and no remarks: its check is complete, so the project engineer can issue it.
     prepare: async (i) => ({ path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId, status: "checked" })).id}/revisions` }),
     expect: { anon: 401, engineer: 403, checker: 403, pe: 201, admin: 403, other: 404 },
+  },
+  { method: "GET", route: "/api/v1/packages/[packageId]/plan-review", prepare: async (i) => ({ path: `/api/v1/packages/${i.packageId}/plan-review` }), expect: readers },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/plan-review",
+    prepare: async (i) => {
+      const d = await planReviewDraft(i);
+      return { path: `/api/v1/packages/${d.packageId}/plan-review`, body: { revisionId: d.revisionId, reviewer: "Matrix Reviewer", paste: "1. Provide the wind load.\n2. Verify joint L2." } };
+    },
+    expect: { anon: 401, engineer: 403, checker: 403, pe: 201, admin: 403, other: 404 },
+  },
+  {
+    method: "PATCH",
+    route: "/api/v1/packages/[packageId]/plan-review/[commentId]",
+    prepare: async (i) => {
+      const d = await planReviewDraft(i, { comment: true });
+      return { path: `/api/v1/packages/${d.packageId}/plan-review/${d.commentId}`, body: { response: "Added in the draft." } };
+    },
+    expect: { anon: 401, engineer: 403, checker: 403, pe: 200, admin: 403, other: 404 },
+  },
+  {
+    method: "DELETE",
+    route: "/api/v1/packages/[packageId]/plan-review/[commentId]",
+    prepare: async (i) => {
+      const d = await planReviewDraft(i, { comment: true });
+      return { path: `/api/v1/packages/${d.packageId}/plan-review/${d.commentId}` };
+    },
+    expect: { anon: 401, engineer: 403, checker: 403, pe: 204, admin: 403, other: 404 },
+  },
+  {
+    method: "GET",
+    route: "/api/v1/packages/[packageId]/plan-review/letter",
+    prepare: async (i) => ({ path: `/api/v1/packages/${(await planReviewDraft(i, { comment: true })).packageId}/plan-review/letter` }),
+    expect: readers,
+  },
+  { method: "GET", route: "/api/v1/packages/[packageId]/exports", prepare: async (i) => ({ path: `/api/v1/packages/${i.packageId}/exports` }), expect: readers },
+  {
+    method: "POST",
+    route: "/api/v1/packages/[packageId]/exports",
+    // Every project member may export (viewers too, and the firm admin); the job is queued, answered 202.
+    prepare: async (i) => ({ path: `/api/v1/packages/${(await seedPackage({ projectId: i.footbridgeId })).id}/exports`, body: { format: "docx" } }),
+    expect: { anon: 401, engineer: 202, checker: 202, pe: 202, admin: 202, other: 404 },
+  },
+  {
+    method: "GET",
+    route: "/api/v1/exports/[exportId]/download",
+    prepare: async (i) => ({ path: signExportLink((await doneExport(i)).id).url }),
+    expect: readers,
+  },
+  {
+    method: "GET",
+    route: "/api/v1/verify/[token]",
+    // Public: the verification page needs no sign-in.
+    prepare: async (i) => ({ path: `/api/v1/verify/${(await doneExport(i, true)).token}` }),
+    expect: all(200),
+  },
+  {
+    method: "POST",
+    route: "/api/v1/verify/[token]",
+    prepare: async (i) => ({ path: `/api/v1/verify/${(await doneExport(i, true)).token}`, body: { sha256: "b".repeat(64) } }),
+    expect: all(200),
   },
 ];
 

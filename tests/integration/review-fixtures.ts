@@ -5,7 +5,7 @@ import type { ActingUser } from "@/lib/data/users";
 import { saveDocument } from "@/lib/packages/save-document";
 import { assignChecker } from "@/lib/review/assign-checker";
 import { markCalc } from "@/lib/review/mark-calc";
-import { seedPackage, seedTeam } from "../support/seed";
+import { seedPackage, seedSealProfile, seedTeam } from "../support/seed";
 
 /** Shared set-up of the review tests (not a test file itself): a team, a package with two formula calcs, and its checker. */
 
@@ -30,9 +30,13 @@ export async function saveAs(actor: ActingUser, projectId: string, packageId: st
   if (!saved.ok) throw new Error("the fixture's save met a conflict");
 }
 
-/** A team and a draft package holding `document`, its checker assigned by the project engineer unless told otherwise. */
-export async function reviewTeam(o: { document?: unknown; assign?: boolean } = {}) {
+/**
+ * A team and a draft package holding `document`, its checker assigned by the project engineer unless told otherwise.
+ * The project engineer has a valid seal profile (issuing needs one) unless `seal: false`.
+ */
+export async function reviewTeam(o: { document?: unknown; assign?: boolean; seal?: boolean } = {}) {
   const team = await seedTeam();
+  if (o.seal ?? true) await seedSealProfile(team.pe);
   const pkg = await seedPackage({ projectId: team.project.id, title: `Review ${randomUUID().slice(0, 6)}` });
   await saveAs(team.engineer, team.project.id, pkg.id, o.document ?? twoFormulaDocument());
   if (o.assign ?? true) await assignChecker({ actor: team.pe, packageId: pkg.id, checkerId: team.checker.id });

@@ -3,6 +3,9 @@ import { db } from "@/db/knex";
 import type { FirmRole, ProjectRole } from "@/lib/access/roles";
 import { hashPassword } from "@/lib/auth/password";
 import { findActingUser, type ActingUser } from "@/lib/data/users";
+import { saveSealProfile } from "@/lib/seals/save-seal-profile";
+import { uploadSealImage } from "@/lib/seals/upload-seal-image";
+import { TINY_PNG } from "./tiny-png";
 
 /** Seed helpers: each test builds exactly what it needs, with unique names, and depends on no other test's rows. */
 
@@ -55,4 +58,18 @@ export async function seedTeam() {
     ],
   });
   return { firm, admin, engineer, checker, pe, viewer, outsider, project };
+}
+
+/**
+ * A seal profile for `user`, through the real save and upload (the image, a tiny PNG unless
+ * given, is stored in S3). Valid by default: expires on 31 December of next year.
+ * Pass `image: null` for a profile without an image.
+ */
+export async function seedSealProfile(
+  user: Pick<ActingUser, "id" | "firmId" | "name">,
+  o: { name?: string; licenceNumber?: string; jurisdiction?: string; expiresOn?: string; image?: Buffer | null } = {},
+): Promise<void> {
+  const expiresOn = o.expiresOn ?? `${new Date().getUTCFullYear() + 1}-12-31`;
+  await saveSealProfile({ actor: user, input: { name: o.name ?? user.name, licenceNumber: o.licenceNumber ?? `PE-T${randomUUID().slice(0, 6)}`, jurisdiction: o.jurisdiction ?? "Testland", expiresOn } });
+  if (o.image !== null) await uploadSealImage({ actor: user, bytes: o.image ?? TINY_PNG });
 }

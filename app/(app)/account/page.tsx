@@ -1,13 +1,16 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { AccountForm } from "@/components/account/account-form";
+import { SealSection } from "@/components/account/seal-section";
 import { getActingUser } from "@/lib/auth/acting-user";
+import { getSealProfile } from "@/lib/seals/get-seal-profile";
 
 export const metadata: Metadata = { title: "Account" };
 
 export default async function AccountPage() {
   const user = await getActingUser();
   if (!user) redirect("/sign-in");
+  const seal = await getSealProfile({ actor: user });
   return (
     <section className="max-w-lg space-y-4">
       <h1>Your account</h1>
@@ -18,6 +21,7 @@ export default async function AccountPage() {
         <dd>{user.firmName} ({user.firmRole === "admin" ? "firm admin" : "firm member"})</dd>
       </dl>
       <AccountForm name={user.name} />
+      <SealSection initial={seal} />
     </section>
   );
 }

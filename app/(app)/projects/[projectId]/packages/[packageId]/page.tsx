@@ -5,6 +5,7 @@ import { loadProjectPage } from "@/lib/access/load-project-page";
 import { findPackage } from "@/lib/data/packages";
 import { listProjectMembers } from "@/lib/data/project-members";
 import { isUuid } from "@/lib/data/projects";
+import { listRevisionHeads } from "@/lib/review/list-revision-heads";
 
 export default async function PackagePage({ params }: { params: Promise<{ projectId: string; packageId: string }> }) {
   const { projectId, packageId } = await params;
@@ -12,6 +13,7 @@ export default async function PackagePage({ params }: { params: Promise<{ projec
   const pkg = isUuid(packageId) ? await findPackage(projectId, packageId, { withDocument: true }) : undefined;
   if (!pkg) notFound();
   const members = await listProjectMembers(projectId);
+  const revisions = (await listRevisionHeads({ actor: user, packageId: pkg.id })).map((r) => ({ id: r.id, label: r.label }));
   const g = access.grantees;
   return (
     <PackageView
@@ -20,6 +22,7 @@ export default async function PackagePage({ params }: { params: Promise<{ projec
       unitSystem={access.project.unitSystem}
       canEdit={can("package.edit", g)}
       canDelete={can("package.delete", g)}
+      exports={{ revisions, canExport: can("export.create", g) }}
       review={{
         status: pkg.status,
         assignedChecker: pkg.assignedChecker,
