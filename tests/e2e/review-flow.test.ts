@@ -1,3 +1,8 @@
+import { execFileSync, spawnSync } from "node:child_process";
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { unzipSync, strFromU8 } from "fflate";
 import type { Page } from "puppeteer-core";
 import { describe, expect, it } from "vitest";
 import { db } from "@/db/knex";
@@ -142,5 +147,95 @@ describe("checking and issuing the footbridge package, in the browser with the d
     await clickText(pePage, '[data-testid="review-panel"]', "Start next revision");
     await waitForStatus(pePage, "draft");
     for (const p of [pePage, engPage, chkPage]) await p.browserContext().close();
+  });
+
+  it("exports the issued Rev 0 as a signed PDF and a DOCX that the project engineer downloads, and the verification page tells the file from an altered copy", { timeout: 240_000 }, async () => {
+    const pe = demoLogin("projectEngineer");
+    const revision = await db().from("revisions").where({ packageId: suite.ids.trussPackageId, number: 0 }).first();
+    expect(revision, "the first test issues Rev 0").toBeDefined();
+    const page = await signInPage(suite.browser, pe.email, pe.password);
+    await openPackage(page);
+    const target = `[data-testid="export-target"][data-revision="${revision.id}"]`;
+    await (await page.waitForSelector(`${target} [data-testid="export-pdf"]`))!.click();
+    await page.waitForFunction(() => document.querySelectorAll('[data-testid="export-row"]').length >= 1, { timeout: 20000 });
+    await (await page.waitForSelector(`${target} [data-testid="export-docx"]`))!.click();
+    // The worker renders both; the panel follows them to done (a failure would show its reason and fail here).
+    await page.waitForFunction(
+      () => {
+        const rows = [...document.querySelectorAll('[data-testid="export-row"]')];
+        const done = (f: string) => rows.some((r) => r.getAttribute("data-format") === f && r.getAttribute("data-status") === "done");
+        return done("pdf") && done("docx");
+      },
+      { timeout: 180_000, polling: 1000 },
+    );
+
+    const dir = mkdtempSync(join(tmpdir(), "pp-export-"));
+    const download = async (format: string) => {
+      const href = await page.$eval(`[data-testid="export-row"][data-format="${format}"][data-status="done"] [data-testid="export-download"]`, (a) => (a as HTMLAnchorElement).href);
+      const base64 = await page.evaluate(async (url) => {
+        const res = await fetch(url);
+        if (!res.ok) throw new Error(`download answered ${res.status}`);
+        const bytes = new Uint8Array(await res.arrayBuffer());
+        let bin = "";
+        for (let i = 0; i < bytes.length; i += 0x8000) bin += String.fromCharCode(...bytes.subarray(i, i + 0x8000));
+        return btoa(bin);
+      }, href);
+      return Buffer.from(base64, "base64");
+    };
+
+    // The PDF: every sheet numbered, the revision's fingerprint on the cover, a valid signature.
+    const pdf = await download("pdf");
+    const pdfPath = join(dir, "rev0.pdf");
+    writeFileSync(pdfPath, pdf);
+    const pageCount = Number(/Pages:\s+(\d+)/.exec(execFileSync("pdfinfo", [pdfPath], { encoding: "utf8" }))?.[1]);
+    const sheets = execFileSync("pdftotext", ["-layout", pdfPath, "-"], { encoding: "utf8" }).split("\f").slice(0, pageCount);
+    expect(pageCount).toBeGreaterThan(3);
+    sheets.forEach((text, i) => expect(text.replace(/\s+/g, " ")).toContain(`Sheet ${i + 1} of ${pageCount}`));
+    expect(sheets[0].replace(/\s+/g, "")).toContain(revision.fingerprint);
+    expect(sheets[0]).toMatch(/digitally signed/i);
+    expect(execFileSync("pdfsig", [pdfPath], { encoding: "utf8" })).toMatch(/Signature is Valid/);
+
+    // One byte changed inside the signed range: pdfsig no longer validates it.
+    const altered = Buffer.from(pdf);
+    const at = altered.indexOf("Sheet 1 of");
+    const spot = at > 0 ? at : Math.floor(altered.length / 3);
+    altered[spot] = altered[spot] ^ 0x01;
+    const alteredPath = join(dir, "rev0-altered.pdf");
+    writeFileSync(alteredPath, altered);
+    const sig = spawnSync("pdfsig", [alteredPath], { encoding: "utf8" });
+    expect(`${sig.stdout}${sig.stderr}`).not.toMatch(/Signature is Valid/);
+
+    // The public verification page, signed out: the issued facts, and a drop of each file.
+    const exportRow = await db().from("exports").where({ revisionId: revision.id, format: "pdf", status: "done" }).first();
+    const anonymous = await (await suite.browser.createBrowserContext()).newPage();
+    await anonymous.goto(`${BASE_URL}/verify/${exportRow.verifyToken}`, { waitUntil: "networkidle0" });
+    const shown = await anonymous.$eval('[data-testid="verification-page"]', (el) => el.textContent ?? "");
+    expect(shown).toContain(revision.fingerprint);
+    expect(shown).toContain(exportRow.sha256);
+    const drop = async (path: string) => {
+      const input = await anonymous.waitForSelector('[data-testid="verify-file-input"]');
+      await (input as unknown as { uploadFile(p: string): Promise<void> }).uploadFile(path);
+      const handle = await anonymous.waitForFunction(
+        (prev) => {
+          const el = document.querySelector('[data-testid="verify-outcome"]');
+          return el && el.textContent !== prev ? el.getAttribute("data-identical") : null;
+        },
+        { timeout: 20000 },
+        await anonymous.$eval("body", () => document.querySelector('[data-testid="verify-outcome"]')?.textContent ?? ""),
+      );
+      return (await handle.jsonValue()) as string;
+    };
+    expect(await drop(pdfPath)).toBe("true");
+    expect(await drop(alteredPath)).toBe("false");
+    const wrong = await anonymous.goto(`${BASE_URL}/verify/NoSuchToken0000000000000`);
+    expect(wrong?.status()).toBe(404);
+
+    // The DOCX: every equation a native Word equation.
+    const docx = await download("docx");
+    const xml = strFromU8(unzipSync(new Uint8Array(docx))["word/document.xml"]);
+    expect((xml.match(/<m:oMath[\s>]/g) ?? []).length).toBeGreaterThan(50);
+    expect(xml).toContain("Rev 0");
+
+    for (const p of [page, anonymous]) await p.browserContext().close();
   });
 });
