@@ -13,15 +13,19 @@ function paginatorSource(): string {
   return paginator;
 }
 
-export type RenderReportPdfOptions = { onProgress?: (sheet: number, total: number) => void | Promise<void> };
+export type RenderReportPdfOptions = {
+  onProgress?: (sheet: number, total: number) => void | Promise<void>;
+  /** Also return the finished sheet HTML (the benchmark prints it with Chromium alone); serializing it costs time, so only on request. */
+  keepHtml?: boolean;
+};
 
 /**
  * The package as a PDF: the report HTML is laid out in Chromium, flowed into
  * sheets by templates/paginate-sheets.js, and printed at the sheet size with
- * zero margins. Returns the finished (paginated) HTML too, so the benchmark
- * can time Chromium printing the same document alone.
+ * zero margins. On request it returns the finished (paginated) HTML too, so
+ * the benchmark can time Chromium printing the same document alone.
  */
-export async function renderReportPdf(model: ReportModel, options: RenderReportPdfOptions = {}): Promise<{ pdf: Buffer; sheetCount: number; html: string }> {
+export async function renderReportPdf(model: ReportModel, options: RenderReportPdfOptions = {}): Promise<{ pdf: Buffer; sheetCount: number; html: string | null }> {
   const source = renderReportHtml(model);
   const browser = await getBrowser();
   const page = await browser.newPage();
@@ -30,7 +34,7 @@ export async function renderReportPdf(model: ReportModel, options: RenderReportP
     await page.addScriptTag({ content: paginatorSource(), id: "pp-paginate-script" });
     const layout = (await page.evaluate("window.ppPaginate()")) as { sheets: number; repaired: number; overflowing: number };
     await options.onProgress?.(0, layout.sheets);
-    const html = await page.content();
+    const html = options.keepHtml ? await page.content() : null;
     const pdf = await printPage(page, model.meta.paperSize);
     await options.onProgress?.(layout.sheets, layout.sheets);
     return { pdf, sheetCount: layout.sheets, html };
