@@ -1,5 +1,5 @@
 import { execFileSync } from "node:child_process";
-import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -116,13 +116,17 @@ describe("the footbridge package as a PDF", () => {
   });
 
   it("renders the cover and a calc sheet to pictures for review", () => {
+    // pdftoppm pads the page number to the width of the page count.
+    const pad = (n: number) => String(n).padStart(String(pages(issued.path)).length, "0");
+    // .run/ is git-ignored and absent on a fresh clone.
     const out = join(process.cwd(), ".run", "tmp");
+    mkdirSync(out, { recursive: true });
     execFileSync("pdftoppm", ["-png", "-r", "60", "-f", "1", "-l", "1", issued.path, join(out, "report-cover")]);
     const text = textOf(issued.path);
     const s1 = text.findIndex((p) => /^\s*S1\s+SECTION CUT/m.test(p));
     expect(s1).toBeGreaterThan(1);
     execFileSync("pdftoppm", ["-png", "-r", "60", "-f", String(s1 + 1), "-l", String(s1 + 1), issued.path, join(out, "report-calc")]);
-    // S1 was changed since the previous revision: its sheet carries the revision mark in the title block.
+    for (const picture of [`report-cover-${pad(1)}.png`, `report-calc-${pad(s1 + 1)}.png`]) expect(statSync(join(out, picture)).size).toBeGreaterThan(10_000);
     expect(issued.sheetCount).toBe(pages(issued.path));
   });
 });
