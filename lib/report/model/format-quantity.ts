@@ -1,3 +1,5 @@
+import { formatNumber } from "@/components/diagrams/format-number";
+
 /** Fixed decimals with a true minus sign; "—" for anything not finite (a report never prints NaN). */
 export function fixed(x: number | null | undefined, decimals = 1): string {
   if (x === null || x === undefined || !Number.isFinite(x)) return "—";
@@ -7,15 +9,9 @@ export function fixed(x: number | null | undefined, decimals = 1): string {
   return rounded < 0 ? `\u2212${s}` : s;
 }
 
-/** Significant figures without rounding away integer digits; "—" for non-finite values. */
+/** Significant figures without rounding away integer digits, as the diagrams print them; "—" for non-finite values. */
 export function sig(x: number | null | undefined, figures = 4): string {
-  if (x === null || x === undefined || !Number.isFinite(x)) return "—";
-  const abs = Math.abs(x);
-  if (abs < 1e-9) return "0";
-  const digits = Math.min(9, Math.max(0, figures - 1 - Math.floor(Math.log10(abs))));
-  let s = abs.toFixed(digits);
-  if (s.includes(".")) s = s.replace(/0+$/, "").replace(/\.$/, "");
-  return x < 0 ? `\u2212${s}` : s;
+  return x === null || x === undefined ? "—" : formatNumber(x, figures);
 }
 
 /** A unit as printed: mathjs syntax to typography (kN*m → kN·m, mm^2 → mm²). */

@@ -31,7 +31,8 @@ export default async function PackagePage({ params }: { params: Promise<{ projec
           userId: user.id,
           canRemark: can("remark.create", g),
           canReply: can("remark.reply", g),
-          canCloseAny: access.role === "project_engineer",
+          // As closeRemark decides: the engineer of record (who may issue) closes any remark.
+          canCloseAny: can("revision.issue", g),
           canCloseOwn: can("remark.close", g),
           canCheck: can("calc.check", g) && pkg.assignedChecker === user.id,
           canSubmit: can("package.submit", g),
