@@ -214,6 +214,8 @@ describe("checking and issuing the footbridge package, in the browser with the d
     expect(shown).toContain(exportRow.sha256);
     const drop = async (path: string) => {
       const input = await anonymous.waitForSelector('[data-testid="verify-file-input"]');
+      // Read the outcome shown before this drop first: the answer can arrive before uploadFile returns.
+      const before = await anonymous.$eval("body", () => document.querySelector('[data-testid="verify-outcome"]')?.textContent ?? "");
       await (input as unknown as { uploadFile(p: string): Promise<void> }).uploadFile(path);
       const handle = await anonymous.waitForFunction(
         (prev) => {
@@ -221,7 +223,7 @@ describe("checking and issuing the footbridge package, in the browser with the d
           return el && el.textContent !== prev ? el.getAttribute("data-identical") : null;
         },
         { timeout: 20000 },
-        await anonymous.$eval("body", () => document.querySelector('[data-testid="verify-outcome"]')?.textContent ?? ""),
+        before,
       );
       return (await handle.jsonValue()) as string;
     };
